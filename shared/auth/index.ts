@@ -1,0 +1,3 @@
+export * from './role';
+export * from './session-user';
+export * from './auth-api';

@@ -1,0 +1,2 @@
+export * from './member';
+export * from './members-api';
