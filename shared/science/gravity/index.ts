@@ -1,0 +1,4 @@
+export * from './plato';
+export * from './brix';
+export * from './gravity-reference';
+export * from './refractometer';
