@@ -8,7 +8,7 @@ const moduleNameMapper = {
   '^@shared/(.*)$': '<rootDir>/shared/$1',
 };
 const nodeTransform = {
-  '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.spec.json', isolatedModules: true }],
+  '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.spec.json' }],
 };
 
 module.exports = {

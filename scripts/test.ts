@@ -1,0 +1,64 @@
+import { spawnSync } from 'node:child_process';
+import { mkdirSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import { Knex } from 'knex';
+import { loadConfig } from '../server/config';
+import { ensureDatabaseAndUser, openMigratedDb } from './setup/app-database';
+import { buildClientIfStale } from './setup/client-build';
+import { readOrCreateSecrets } from './setup/local-secrets';
+import { PrivateMariaDb, startPrivateMariaDb } from './setup/private-mariadb';
+import { reportFailure, step } from './setup/step-log';
+import { ensureSystemPackages } from './setup/system-packages';
+
+const root = join(__dirname, '..');
+const home = join(root, '.data', 'test');
+const report = join(root, 'test-results', 'jest.json');
+
+function runJest(env: NodeJS.ProcessEnv, extraArgs: string[]): number {
+  step('Running every test: shared, server, client, integration (real MariaDB) and end-to-end (Chromium)');
+  mkdirSync(join(root, 'test-results'), { recursive: true });
+  rmSync(report, { force: true });
+  const args = ['--maxWorkers=2', '--json', `--outputFile=${report}`, ...(process.env.CI ? ['--ci'] : []), ...extraArgs];
+  const result = spawnSync(join(root, 'node_modules', '.bin', 'jest'), args, { cwd: root, stdio: 'inherit', env });
+  spawnSync(process.execPath, [join(__dirname, 'print-test-summary.mjs'), report], { stdio: 'inherit' });
+  return result.status ?? 1;
+}
+
+async function main(): Promise<number> {
+  let mariadb: PrivateMariaDb | undefined;
+  let knex: Knex | undefined;
+  try {
+    ensureSystemPackages(['mariadb-server', 'chromium']);
+    const secrets = readOrCreateSecrets(home);
+    const dbPort = Number(process.env.TEST_DB_PORT ?? 3408);
+    mariadb = await startPrivateMariaDb({ home, port: dbPort });
+    const env = {
+      ...process.env,
+      NODE_ENV: 'test',
+      DB_PORT: String(dbPort),
+      DB_NAME: 'commonwort_test',
+      DB_USER: 'commonwort_test',
+      DB_PASSWORD: secrets.dbPassword,
+      SESSION_SECRET: secrets.sessionSecret,
+      BCRYPT_COST: '4',
+      LOG_LEVEL: 'silent',
+      CHROMIUM_PATH: '/usr/bin/chromium',
+    };
+    const config = loadConfig(env);
+    ensureDatabaseAndUser(mariadb, config.db, true);
+    knex = await openMigratedDb(config.db);
+    await knex.destroy();
+    knex = undefined;
+    const jestArgs = process.argv.slice(2);
+    // A run limited to some projects needs the built app only when it includes the browser tests.
+    if (!jestArgs.includes('--selectProjects') || jestArgs.includes('e2e')) buildClientIfStale(root, config.clientDist);
+    return runJest(env, jestArgs);
+  } catch (error) {
+    return reportFailure(error);
+  } finally {
+    await knex?.destroy();
+    mariadb?.stop();
+  }
+}
+
+void main().then((code) => process.exit(code));

@@ -1,0 +1,91 @@
+import compression from 'compression';
+import express, { Express } from 'express';
+import helmet from 'helmet';
+import { Knex } from 'knex';
+import { randomUUID } from 'node:crypto';
+import pino from 'pino';
+import pinoHttp from 'pino-http';
+import {
+  createAuthRouter,
+  createAuthService,
+  createPassport,
+  createPasswordHasher,
+  createSessionMiddleware,
+  createSignInThrottle,
+  csrfProtection,
+  SignInThrottleLimits,
+} from './auth';
+import { createClientRouter } from './client/serve-client';
+import { Config } from './config';
+import { apiNotFound, errorMiddleware } from './errors/error-middleware';
+import { createHealthRouter } from './health/health.routes';
+import { mountApi } from './http/api-mount';
+import { createInvitationsRouter, createInvitationsService } from './invitations';
+import { createMembersRouter, createMembersService } from './members';
+import { createPasswordResetsRouter, createPasswordResetsService } from './password-resets';
+
+export interface AppDeps {
+  config: Config;
+  db: Knex;
+  signInLimits?: SignInThrottleLimits;
+  /** Interval of the expired-session sweep; 0 turns it off (tests). */
+  sessionCleanupMs?: number;
+}
+
+/** The app and what must be closed with it. */
+export interface CreatedApp {
+  app: Express;
+  close(): void;
+}
+
+const contentSecurityPolicy = {
+  useDefaults: false,
+  directives: {
+    'default-src': ["'self'"],
+    'script-src': ["'self'"],
+    'script-src-attr': ["'none'"],
+    // Angular and Material set component styles at run time.
+    'style-src': ["'self'", "'unsafe-inline'"],
+    'font-src': ["'self'"],
+    'img-src': ["'self'", 'data:'],
+    'connect-src': ["'self'"],
+    'object-src': ["'none'"],
+    'base-uri': ["'self'"],
+    'form-action': ["'self'"],
+    'frame-ancestors': ["'none'"],
+  },
+};
+
+/** Builds the Express app: API routers under /api, the built client, one error handler last. */
+export function createApp({ config, db, signInLimits, sessionCleanupMs = 15 * 60 * 1000 }: AppDeps): CreatedApp {
+  const app = express();
+  app.set('trust proxy', config.trustProxy);
+  app.disable('x-powered-by');
+  const logger = pino({ level: config.logLevel });
+  app.use(pinoHttp({ logger, genReqId: (req, res) => {
+    const id = randomUUID();
+    res.setHeader('X-Request-Id', id);
+    return id;
+  } }));
+  app.use(helmet({ contentSecurityPolicy }));
+  app.use(compression());
+  app.use('/api', express.json({ limit: '100kb' }));
+
+  const hasher = createPasswordHasher(config.bcryptCost);
+  const auth = createAuthService(db, hasher);
+  const passport = createPassport(auth);
+  const sessions = createSessionMiddleware(db, config.sessionSecret, sessionCleanupMs);
+  const invitations = createInvitationsService({ db, hasher, publicUrl: config.publicUrl });
+  const resets = createPasswordResetsService({ db, hasher, publicUrl: config.publicUrl });
+
+  mountApi(app, '/api/health', createHealthRouter(db));
+  app.use('/api', sessions.middleware, passport.session(), csrfProtection);
+  mountApi(app, '/api/auth', createAuthRouter({ auth, passport, throttle: createSignInThrottle(signInLimits) }));
+  mountApi(app, '/api/invitations', createInvitationsRouter(invitations));
+  mountApi(app, '/api/password-resets', createPasswordResetsRouter(resets));
+  mountApi(app, '/api/members', createMembersRouter(createMembersService(db, invitations), resets));
+  app.use('/api', apiNotFound);
+  app.use(createClientRouter(config.clientDist));
+  app.use(errorMiddleware);
+  return { app, close: sessions.close };
+}

@@ -1,0 +1,2 @@
+export { createMembersRouter } from './members.routes';
+export { createMembersService, type MembersService } from './members.service';

@@ -1,0 +1,54 @@
+import { Knex } from 'knex';
+import { IssuedPasswordReset } from '@shared/members';
+import { recordAudit } from '../audit/audit-log';
+import { createOneTimeToken, hashOneTimeToken } from '../auth/one-time-token';
+import { PasswordHasher } from '../auth/password-hasher';
+import { AppError } from '../errors/app-error';
+import { usersRepository } from '../users/users.repository';
+import { passwordResetsRepository } from './password-resets.repository';
+
+const RESET_HOURS = 24;
+
+/** Forgotten passwords: a request is noted for the officers; a one-time link with an expiry sets a new one. */
+export function createPasswordResetsService(deps: { db: Knex; hasher: PasswordHasher; publicUrl: string; now?: () => Date }) {
+  const { db, hasher } = deps;
+  const now = deps.now ?? (() => new Date());
+
+  return {
+    /** Notes the request when the e-mail belongs to an active member; says nothing either way. */
+    async request(email: string): Promise<void> {
+      const found = await usersRepository.findCredentials(db, email);
+      if (!found?.user.active) return;
+      await usersRepository.update(db, found.user.id, { password_reset_requested_at: now() });
+      await recordAudit(db, { actorUserId: null, action: 'password-reset-requested', subjectType: 'user', subjectId: found.user.id });
+    },
+
+    /** An officer issues a one-time link to hand to the member. */
+    async issue(actorId: number, userId: number): Promise<IssuedPasswordReset> {
+      const user = await usersRepository.findById(db, userId);
+      if (!user?.active) throw new AppError('member-not-found', 'No active member has this id.', 404);
+      const { token, hash } = createOneTimeToken();
+      const expiresAt = new Date(now().getTime() + RESET_HOURS * 3600 * 1000);
+      await db.transaction(async (trx) => {
+        await passwordResetsRepository.replace(trx, { user_id: userId, token_hash: hash, issued_by_user_id: actorId, expires_at: expiresAt }, now());
+        await recordAudit(trx, { actorUserId: actorId, action: 'password-reset-issued', subjectType: 'user', subjectId: userId });
+      });
+      return { link: `${deps.publicUrl}/reset-password/${token}`, expiresAt: expiresAt.toISOString() };
+    },
+
+    /** Sets the new password, spends the token and ends the member's other sessions. */
+    async complete(token: string, password: string): Promise<void> {
+      const passwordHash = await hasher.hash(password);
+      await db.transaction(async (trx) => {
+        const row = await passwordResetsRepository.lockUsable(trx, hashOneTimeToken(token), now());
+        if (!row) throw new AppError('reset-link-invalid', 'This reset link is not valid: it may have expired or been used.', 404);
+        await usersRepository.update(trx, row.user_id, { password_hash: passwordHash, password_reset_requested_at: null });
+        await passwordResetsRepository.markUsed(trx, row.id, now());
+        await passwordResetsRepository.endSessionsOf(trx, row.user_id);
+        await recordAudit(trx, { actorUserId: row.user_id, action: 'password-reset-completed', subjectType: 'user', subjectId: row.user_id });
+      });
+    },
+  };
+}
+
+export type PasswordResetsService = ReturnType<typeof createPasswordResetsService>;

@@ -1,0 +1,64 @@
+import request from 'supertest';
+import { Express } from 'express';
+import { CSRF_COOKIE, CSRF_HEADER } from '@server/auth';
+import { TestUser } from './user-factory';
+
+type Method = 'get' | 'post' | 'patch' | 'put' | 'delete';
+
+function cookieValue(res: request.Response, name: string): string | undefined {
+  const raw = res.headers['set-cookie'] as unknown as string[] | undefined;
+  const cookie = raw?.find((c) => c.startsWith(`${name}=`));
+  return cookie ? decodeURIComponent(cookie.split(';')[0].slice(name.length + 1)) : undefined;
+}
+
+/** A browser-like caller: keeps cookies and echoes the CSRF token as Angular's HttpClient does. */
+export class ApiClient {
+  readonly agent: ReturnType<typeof request.agent>;
+  private token = '';
+  private readonly cookies = new Map<string, string>();
+
+  constructor(app: Express) {
+    this.agent = request.agent(app);
+  }
+
+  /** Starts an anonymous client that already holds its CSRF token. */
+  static async anonymous(app: Express): Promise<ApiClient> {
+    const client = new ApiClient(app);
+    await client.get('/api/auth/session');
+    return client;
+  }
+
+  static async signedIn(app: Express, user: TestUser): Promise<ApiClient> {
+    const client = await ApiClient.anonymous(app);
+    const res = await client.send('post', '/api/auth/sign-in', { email: user.email, password: user.password });
+    if (res.status !== 200) throw new Error(`sign-in failed for the test user: ${res.status} ${JSON.stringify(res.body)}`);
+    return client;
+  }
+
+  async get(path: string): Promise<request.Response> {
+    return this.remember(await this.agent.get(path));
+  }
+
+  /** A request with the CSRF header (leave it out with `withToken: false`). */
+  async send(method: Method, path: string, body?: object, withToken = true): Promise<request.Response> {
+    let req = this.agent[method](path);
+    if (withToken) req = req.set(CSRF_HEADER, this.token);
+    return this.remember(await (body ? req.send(body) : req));
+  }
+
+  /** The cookies this client holds, as a Cookie header (to replay them against another app instance). */
+  cookieHeader(): string {
+    return [...this.cookies].map(([name, value]) => `${name}=${value}`).join('; ');
+  }
+
+  private remember(res: request.Response): request.Response {
+    this.token = cookieValue(res, CSRF_COOKIE) ?? this.token;
+    const raw = (res.headers['set-cookie'] as unknown as string[] | undefined) ?? [];
+    for (const cookie of raw) {
+      const [pair] = cookie.split(';');
+      const at = pair.indexOf('=');
+      this.cookies.set(pair.slice(0, at), pair.slice(at + 1));
+    }
+    return res;
+  }
+}

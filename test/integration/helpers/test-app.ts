@@ -1,0 +1,26 @@
+import { Knex } from 'knex';
+import { createApp, CreatedApp } from '@server/app';
+import { Config, loadConfig } from '@server/config';
+import { createDb } from '@server/db';
+import { SignInThrottleLimits } from '@server/auth';
+
+/** Configuration of the test database prepared by `npm test`; a clear error when run some other way. */
+export function testConfig(): Config {
+  if (!process.env.DB_PASSWORD) {
+    throw new Error('Integration tests need the private test database: run them with `npm test` (or `npm test -- --selectProjects integration`).');
+  }
+  return loadConfig(process.env);
+}
+
+/** The real app on the real test database; `close()` releases both. */
+export interface TestApp extends CreatedApp {
+  db: Knex;
+  config: Config;
+}
+
+export function createTestApp(options: { db?: Knex; signInLimits?: SignInThrottleLimits } = {}): TestApp {
+  const config = testConfig();
+  const db = options.db ?? createDb(config.db);
+  const created = createApp({ config, db, signInLimits: options.signInLimits, sessionCleanupMs: 0 });
+  return { ...created, db, config };
+}
