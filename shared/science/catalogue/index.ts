@@ -1,0 +1,2 @@
+export * from './catalogue-entry';
+export * from './function-catalogue';
