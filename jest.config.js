@@ -47,6 +47,7 @@ module.exports = {
       displayName: 'e2e',
       testEnvironment: 'node',
       roots: ['<rootDir>/test/e2e'],
+      testMatch: ['**/*.e2e-spec.ts'],
       transform: nodeTransform,
       moduleNameMapper,
       testTimeout: 60000,

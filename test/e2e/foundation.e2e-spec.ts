@@ -1,0 +1,87 @@
+import { Browser } from 'playwright-core';
+import { createUser } from '../integration/helpers/user-factory';
+import { launchBrowser, newPage, seriousA11yViolations } from './helpers/browser';
+import { startE2eServer, E2eServer } from './helpers/e2e-server';
+import { acceptInvitationPage, membersPage, shell, signInPage } from './helpers/pages';
+
+describe('Foundation in the browser', () => {
+  let server: E2eServer;
+  let browser: Browser;
+  let closeBrowser: () => Promise<void>;
+
+  beforeAll(async () => {
+    server = await startE2eServer();
+    ({ browser, close: closeBrowser } = await launchBrowser());
+  });
+  afterAll(async () => {
+    await closeBrowser?.();
+    await server?.stop();
+  });
+
+  it('when a member signs in on the real page, then Today greets them and no page has a serious accessibility violation', async () => {
+    const member = await createUser(server.db, ['member'], { name: 'Rowan Member' });
+    const { context, page } = await newPage(browser, server.baseUrl);
+    await page.goto('/sign-in');
+    expect(await seriousA11yViolations(page)).toEqual([]);
+    await signInPage.signIn(page, member.email, member.password);
+    await page.waitForURL(/\/today/);
+    expect(await shell.heading(page)).toContain('Today');
+    await page.getByText('Rowan Member').first().waitFor();
+    expect(await seriousA11yViolations(page)).toEqual([]);
+    await context.close();
+  });
+
+  it('when a member opens the Members page, then they are refused and the member list is not shown', async () => {
+    const member = await createUser(server.db, ['member']);
+    const { context, page } = await newPage(browser, server.baseUrl);
+    await signInPage.signIn(page, member.email, member.password);
+    await page.waitForURL(/\/today/);
+    await page.goto('/members');
+    expect(await shell.heading(page)).toBe('Not allowed');
+    expect(await page.getByRole('link', { name: 'Members' }).count()).toBe(0);
+    expect(await seriousA11yViolations(page)).toEqual([]);
+    await context.close();
+  });
+
+  it('when a wrong password is typed, then the page says so and stays on sign-in', async () => {
+    const member = await createUser(server.db, ['member']);
+    const { context, page } = await newPage(browser, server.baseUrl);
+    await signInPage.signIn(page, member.email, 'definitely wrong');
+    await page.getByText('do not match').waitFor();
+    expect(page.url()).toContain('/sign-in');
+    await context.close();
+  });
+
+  it('when an admin invites a person, then the person accepts, lands on Today, and can sign in again', async () => {
+    const admin = await createUser(server.db, ['member', 'admin'], { name: 'Officer Test' });
+    const email = `invitee-${Date.now()}@test.example`;
+    const officer = await newPage(browser, server.baseUrl);
+    await signInPage.signIn(officer.page, admin.email, admin.password);
+    await officer.page.waitForURL(/\/today/);
+    const link = await membersPage.invite(officer.page, email);
+    expect(await seriousA11yViolations(officer.page)).toEqual([]);
+
+    const guest = await newPage(browser, server.baseUrl);
+    await acceptInvitationPage.accept(guest.page, link, 'Juniper Invitee', 'a long enough password');
+    await guest.page.waitForURL(/\/today/);
+    expect(await shell.heading(guest.page)).toContain('Today');
+    await shell.signOut(guest.page);
+    await signInPage.signIn(guest.page, email, 'a long enough password');
+    await guest.page.waitForURL(/\/today/);
+    await officer.context.close();
+    await guest.context.close();
+  });
+
+  it('when a member uses a 375 px wide phone screen, then sign-in and Today work and the navigation opens', async () => {
+    const member = await createUser(server.db, ['member']);
+    const { context, page } = await newPage(browser, server.baseUrl, { width: 375, height: 740 });
+    await signInPage.signIn(page, member.email, member.password);
+    await page.waitForURL(/\/today/);
+    expect(await seriousA11yViolations(page)).toEqual([]);
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await page.getByRole('button', { name: /navigation/i }).click();
+    await page.getByRole('link', { name: 'Today' }).waitFor();
+    await context.close();
+  });
+});

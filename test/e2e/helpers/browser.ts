@@ -1,0 +1,42 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { Browser, BrowserContext, chromium, Page } from 'playwright-core';
+import AxeBuilder from '@axe-core/playwright';
+
+const CHROMIUM_FLAGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+/** Debian's Chromium, headless, with a fresh profile folder of its own. */
+export async function launchBrowser(): Promise<{ browser: Browser; close(): Promise<void> }> {
+  const profileRoot = mkdtempSync(join(tmpdir(), 'commonwort-e2e-'));
+  process.env.TMPDIR = profileRoot;
+  const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', headless: true, args: CHROMIUM_FLAGS });
+  return {
+    browser,
+    async close() {
+      await browser.close();
+      rmSync(profileRoot, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function newPage(browser: Browser, baseURL: string, viewport = { width: 1280, height: 800 }): Promise<{ context: BrowserContext; page: Page }> {
+  const context = await browser.newContext({ baseURL, viewport });
+  return { context, page: await context.newPage() };
+}
+
+/** The serious and critical accessibility violations on the page as it is now (rule id and a target each). */
+export async function seriousA11yViolations(page: Page): Promise<string[]> {
+  const results = await new AxeBuilder({ page }).analyze();
+  return results.violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
+}

@@ -1,0 +1,48 @@
+import { createServer, Server } from 'node:net';
+import { Server as HttpServer } from 'node:http';
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import { Knex } from 'knex';
+import { createApp } from '@server/app';
+import { loadConfig } from '@server/config';
+import { createDb } from '@server/db';
+
+/** The real server with the built app, on a free loopback port, against the test database. */
+export interface E2eServer {
+  baseUrl: string;
+  db: Knex;
+  stop(): Promise<void>;
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe: Server = createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const { port } = probe.address() as { port: number };
+      probe.close(() => resolve(port));
+    });
+  });
+}
+
+export async function startE2eServer(): Promise<E2eServer> {
+  if (!process.env.DB_PASSWORD) throw new Error('End-to-end tests need the test database and the built app: run them with `npm test`.');
+  const port = await freePort();
+  const config = loadConfig({ ...process.env, PORT: String(port), HOST: '127.0.0.1' });
+  if (!existsSync(join(config.clientDist, 'index.html'))) throw new Error(`No built app in ${config.clientDist}: run them with \`npm test\`, which builds it.`);
+  const db = createDb(config.db);
+  const { app, close } = createApp({ config, db, sessionCleanupMs: 0 });
+  const server: HttpServer = await new Promise((resolve) => {
+    const s = app.listen(port, '127.0.0.1', () => resolve(s));
+  });
+  return {
+    baseUrl: config.publicUrl,
+    db,
+    async stop() {
+      await new Promise((resolve) => server.close(resolve));
+      server.closeAllConnections();
+      close();
+      await db.destroy();
+    },
+  };
+}
