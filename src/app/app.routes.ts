@@ -1,0 +1,33 @@
+import { Routes, UrlMatchResult, UrlSegment } from '@angular/router';
+import { ACCOUNT_PAGE_PATHS } from './auth/account-page-paths';
+import { signedInGuard } from './auth/signed-in-guard';
+import { provideMaterialSymbols } from './core/material-symbols';
+
+/** Matches the signed-out pages without consuming a segment, so their chunk loads only for them. */
+function accountPages(segments: UrlSegment[]): UrlMatchResult | null {
+  return segments.length > 0 && ACCOUNT_PAGE_PATHS.includes(segments[0].path) ? { consumed: [] } : null;
+}
+
+export const routes: Routes = [
+  { matcher: accountPages, loadChildren: () => import('./auth/auth.routes').then((m) => m.authRoutes) },
+  {
+    path: '',
+    canActivate: [signedInGuard],
+    providers: [provideMaterialSymbols()],
+    loadComponent: () => import('./core/shell/shell').then((m) => m.Shell),
+    children: [
+      { path: '', pathMatch: 'full', redirectTo: 'today' },
+      { path: 'today', title: 'Today · Commonwort', loadChildren: () => import('./today/today.routes').then((m) => m.todayRoutes) },
+      {
+        path: 'not-allowed',
+        title: 'Not allowed · Commonwort',
+        loadComponent: () => import('./core/not-allowed-page/not-allowed-page').then((m) => m.NotAllowedPage),
+      },
+      {
+        path: '**',
+        title: 'Page not found · Commonwort',
+        loadComponent: () => import('./core/not-found-page/not-found-page').then((m) => m.NotFoundPage),
+      },
+    ],
+  },
+];

@@ -1,0 +1,64 @@
+import { createFeature, createReducer, createSelector, on } from '@ngrx/store';
+import { Role, SessionUser } from '@shared/auth';
+import { AuthApiActions } from './auth-api.actions';
+import { SignInPageActions } from './sign-in-page.actions';
+
+export interface AuthState {
+  /** The signed-in person, or null. */
+  user: SessionUser | null;
+  /** False until the session probe at start-up has answered; guards wait for it. */
+  sessionLoaded: boolean;
+  signingIn: boolean;
+  signInError: string | null;
+  retryAfterSeconds: number | null;
+}
+
+export const initialAuthState: AuthState = {
+  user: null,
+  sessionLoaded: false,
+  signingIn: false,
+  signInError: null,
+  retryAfterSeconds: null,
+};
+
+const noRoles: readonly Role[] = [];
+
+export const authFeature = createFeature({
+  name: 'auth',
+  reducer: createReducer(
+    initialAuthState,
+    on(AuthApiActions.sessionLoadedSuccess, (state, { user }): AuthState => ({ ...state, user, sessionLoaded: true })),
+    on(AuthApiActions.sessionLoadedFailure, (state): AuthState => ({ ...state, user: null, sessionLoaded: true })),
+    on(SignInPageActions.opened, (state): AuthState => ({ ...state, signInError: null, retryAfterSeconds: null })),
+    on(SignInPageActions.submitted, (state): AuthState => ({
+      ...state,
+      signingIn: true,
+      signInError: null,
+      retryAfterSeconds: null,
+    })),
+    on(AuthApiActions.signInSuccess, AuthApiActions.invitationAcceptedSuccess, (state, { user }): AuthState => ({
+      ...state,
+      user,
+      sessionLoaded: true,
+      signingIn: false,
+    })),
+    on(AuthApiActions.signInFailure, (state, { message, retryAfterSeconds }): AuthState => ({
+      ...state,
+      signingIn: false,
+      signInError: message,
+      retryAfterSeconds,
+    })),
+    on(AuthApiActions.signOutSuccess, AuthApiActions.sessionExpired, (): AuthState => ({
+      ...initialAuthState,
+      sessionLoaded: true,
+    })),
+  ),
+  extraSelectors: ({ selectUser }) => {
+    const selectRoles = createSelector(selectUser, (user) => user?.roles ?? noRoles);
+    return {
+      selectRoles,
+      selectIsSignedIn: createSelector(selectUser, (user) => user !== null),
+      selectIsAdmin: createSelector(selectRoles, (roles) => roles.includes('admin')),
+    };
+  },
+});

@@ -1,0 +1,35 @@
+import { Role } from '@shared/auth';
+
+/** One area of the app in the navigation. */
+export interface NavItem {
+  label: string;
+  path: string;
+  icon: string;
+  /** False until the area is built; unavailable areas are not shown. */
+  available: boolean;
+  /** Roles that see the area; null for everyone signed in. */
+  roles: readonly Role[] | null;
+  /** One line for the area's card on Today. */
+  summary: string;
+}
+
+/** The areas of the app, in the product's order. */
+export const NAV_ITEMS: readonly NavItem[] = [
+  { label: 'Today', path: '/today', icon: 'today', available: true, roles: null, summary: 'Your day at the co-op.' },
+  { label: 'Recipes', path: '/recipes', icon: 'menu_book', available: false, roles: null, summary: 'Recipes with live predictions.' },
+  { label: 'Batches', path: '/batches', icon: 'science', available: false, roles: null, summary: 'Batches from recipe to packaging.' },
+  { label: 'Gravity log', path: '/gravity-log', icon: 'water_drop', available: false, roles: null, summary: 'Gravity readings of a batch.' },
+  { label: 'Strength check', path: '/strength-check', icon: 'percent', available: false, roles: null, summary: 'Estimated and density-based ABV.' },
+  { label: 'Reference tables', path: '/reference-tables', icon: 'table_chart', available: false, roles: null, summary: 'Density tables, audited.' },
+  { label: 'Kit room', path: '/kit-room', icon: 'kitchen', available: false, roles: null, summary: 'The shared kit and its bookings.' },
+  { label: 'Brew plan', path: '/brew-plan', icon: 'calendar_month', available: false, roles: null, summary: 'The production calendar.' },
+  { label: 'Dues', path: '/dues', icon: 'payments', available: false, roles: null, summary: 'Plans, payments and receipts.' },
+  {
+    label: 'Members',
+    path: '/members',
+    icon: 'group',
+    available: true,
+    roles: ['admin'],
+    summary: 'People, roles and invitations: invite new members, change roles, hand out reset links.',
+  },
+];

@@ -1,0 +1,21 @@
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { Store } from '@ngrx/store';
+import { authFeature } from '@app/auth/state/auth.feature';
+import { AreaCard } from '../area-card/area-card';
+import { selectTodayAreaCards } from '../today.selectors';
+import { RoleBadge } from '@app/ui/role-badge/role-badge';
+
+@Component({
+  selector: 'cw-today-page',
+  imports: [AreaCard, RoleBadge],
+  templateUrl: './today-page.html',
+  styleUrl: './today-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class TodayPage {
+  private readonly store = inject(Store);
+
+  protected readonly user = this.store.selectSignal(authFeature.selectUser);
+  protected readonly roles = this.store.selectSignal(authFeature.selectRoles);
+  protected readonly areas = this.store.selectSignal(selectTodayAreaCards);
+}
