@@ -23,6 +23,12 @@ import { mountApi } from './http/api-mount';
 import { createInvitationsRouter, createInvitationsService } from './invitations';
 import { createMembersRouter, createMembersService } from './members';
 import { createPasswordResetsRouter, createPasswordResetsService } from './password-resets';
+import { createBrewhouseRouter } from './brewhouse/brewhouse.routes';
+import { createCatalogueRouter } from './catalogue/catalogue.routes';
+import { createCatalogueService } from './catalogue/catalogue.service';
+import { createPreferencesRouter } from './preferences/preferences.routes';
+import { createRecipesRouter, createRecipesService } from './recipes';
+import { createStylesRouter } from './styles/styles.routes';
 
 export interface AppDeps {
   config: Config;
@@ -84,6 +90,11 @@ export function createApp({ config, db, signInLimits, sessionCleanupMs = 15 * 60
   mountApi(app, '/api/invitations', createInvitationsRouter(invitations));
   mountApi(app, '/api/password-resets', createPasswordResetsRouter(resets));
   mountApi(app, '/api/members', createMembersRouter(createMembersService(db, invitations), resets));
+  mountApi(app, '/api/preferences', createPreferencesRouter(db));
+  mountApi(app, '/api/ingredients', createCatalogueRouter(createCatalogueService(db)));
+  mountApi(app, '/api/styles', createStylesRouter(db));
+  mountApi(app, '/api/brewhouse', createBrewhouseRouter(db));
+  mountApi(app, '/api/recipes', createRecipesRouter(createRecipesService(db), db));
   app.use('/api', apiNotFound);
   app.use(createClientRouter(config.clientDist));
   app.use(errorMiddleware);

@@ -2,6 +2,7 @@ import knex, { Knex } from 'knex';
 import { join } from 'node:path';
 import { Config } from './config';
 import { Role } from '@shared/auth';
+import { RecipeDesign } from '@shared/recipes';
 
 export interface UserRow {
   id: number;
@@ -10,6 +11,7 @@ export interface UserRow {
   password_hash: string;
   active: number | boolean;
   password_reset_requested_at: Date | null;
+  unit_system: 'metric' | 'us';
   created_at: Date;
   updated_at: Date;
 }
@@ -51,12 +53,35 @@ export interface AuditLogRow {
   created_at: Date;
 }
 
+export interface RecipeRow {
+  id: number;
+  owner_user_id: number;
+  name: string;
+  visibility: 'private' | 'coop';
+  current_version: number;
+  cloned_from_recipe_id: number | null;
+  archived_at: Date | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface RecipeVersionRow {
+  id: number;
+  recipe_id: number;
+  version: number;
+  design: RecipeDesign;
+  created_by_user_id: number;
+  created_at: Date;
+}
+
 declare module 'knex/types/tables' {
   interface Tables {
-    users: Knex.CompositeTableType<UserRow, Omit<UserRow, 'id' | 'created_at' | 'updated_at' | 'password_reset_requested_at'>, Partial<UserRow>>;
+    users: Knex.CompositeTableType<UserRow, Omit<UserRow, 'id' | 'created_at' | 'updated_at' | 'password_reset_requested_at' | 'unit_system'>, Partial<UserRow>>;
     user_roles: UserRoleRow;
     invitations: Knex.CompositeTableType<InvitationRow, Omit<InvitationRow, 'id' | 'created_at' | 'accepted_at' | 'revoked_at' | 'roles'> & { roles: string }, Partial<InvitationRow>>;
     password_resets: Knex.CompositeTableType<PasswordResetRow, Omit<PasswordResetRow, 'id' | 'created_at' | 'used_at'>, Partial<PasswordResetRow>>;
+    recipes: Knex.CompositeTableType<RecipeRow, Omit<RecipeRow, 'id' | 'created_at' | 'updated_at' | 'archived_at' | 'current_version'> & { current_version?: number }, Partial<RecipeRow>>;
+    recipe_versions: Knex.CompositeTableType<RecipeVersionRow, Omit<RecipeVersionRow, 'id' | 'created_at' | 'design'> & { design: string }>;
     audit_log: Knex.CompositeTableType<AuditLogRow, Omit<AuditLogRow, 'id' | 'created_at' | 'detail'> & { detail: string | null }>;
   }
 }

@@ -1,0 +1,2 @@
+export { createRecipesRouter } from './recipes.routes';
+export { createRecipesService, type RecipesService } from './recipes.service';
