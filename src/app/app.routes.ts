@@ -1,5 +1,6 @@
 import { Routes, UrlMatchResult, UrlSegment } from '@angular/router';
 import { ACCOUNT_PAGE_PATHS } from './auth/account-page-paths';
+import { roleGuard } from './auth/role-guard';
 import { signedInGuard } from './auth/signed-in-guard';
 import { provideMaterialSymbols } from './core/material-symbols';
 
@@ -18,6 +19,12 @@ export const routes: Routes = [
     children: [
       { path: '', pathMatch: 'full', redirectTo: 'today' },
       { path: 'today', title: 'Today · Commonwort', loadChildren: () => import('./today/today.routes').then((m) => m.todayRoutes) },
+      {
+        path: 'members',
+        title: 'Members · Commonwort',
+        canActivate: [roleGuard(['admin'])],
+        loadChildren: () => import('./members/members.routes').then((m) => m.membersRoutes),
+      },
       {
         path: 'not-allowed',
         title: 'Not allowed · Commonwort',

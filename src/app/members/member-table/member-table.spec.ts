@@ -1,0 +1,97 @@
+import { ComponentFixture, TestBed } from '@angular/core/testing';
+import { Member } from '@shared/members';
+import { generateMockMember } from '@app/testing/member-mock';
+import { ActiveChange, MemberTable, RolesChange } from './member-table';
+
+describe('MemberTable', () => {
+  let fixture: ComponentFixture<MemberTable>;
+  const jonah = generateMockMember();
+  const ada = generateMockMember({
+    id: 22,
+    name: 'Ada Okafor',
+    roles: ['member', 'admin'],
+    passwordResetRequestedAt: '2026-11-30T08:00:00.000Z',
+  });
+
+  async function render(members: Member[], savingMemberIds: number[] = []): Promise<HTMLElement> {
+    fixture = TestBed.createComponent(MemberTable);
+    fixture.componentRef.setInput('members', members);
+    fixture.componentRef.setInput('savingMemberIds', savingMemberIds);
+    await fixture.whenStable();
+    return fixture.nativeElement as HTMLElement;
+  }
+
+  const button = (element: HTMLElement, label: string) =>
+    element.querySelector<HTMLButtonElement>(`button[aria-label="${label}"]`)!;
+
+  it('renders one row per member with name, e-mail and state', async () => {
+    const element = await render([jonah, ada]);
+
+    const rows = [...element.querySelectorAll('tbody tr')];
+    expect(rows).toHaveLength(2);
+    expect(rows[0].textContent).toContain('Jonah Weiss');
+    expect(rows[0].textContent).toContain('jonah.weiss@fernhollow.example');
+    expect(rows[0].textContent).toContain('Active');
+  });
+
+  it('marks the roles a member holds as pressed', async () => {
+    const element = await render([ada]);
+
+    expect(button(element, 'admin role for Ada Okafor').getAttribute('aria-pressed')).toBe('true');
+    expect(button(element, 'brewer role for Ada Okafor').getAttribute('aria-pressed')).toBe('false');
+  });
+
+  it('emits the new role list, in the usual order, when a role is added', async () => {
+    const element = await render([jonah]);
+    const changes: RolesChange[] = [];
+    fixture.componentInstance.rolesChanged.subscribe((change) => changes.push(change));
+
+    button(element, 'brewer role for Jonah Weiss').click();
+
+    expect(changes).toEqual([{ memberId: jonah.id, roles: ['member', 'brewer'] }]);
+  });
+
+  it('emits the role list without the role when a held role is removed', async () => {
+    const element = await render([ada]);
+    const changes: RolesChange[] = [];
+    fixture.componentInstance.rolesChanged.subscribe((change) => changes.push(change));
+
+    button(element, 'admin role for Ada Okafor').click();
+
+    expect(changes).toEqual([{ memberId: ada.id, roles: ['member'] }]);
+  });
+
+  it('does not offer removing the only role a member holds', async () => {
+    const element = await render([jonah]);
+
+    expect(button(element, 'member role for Jonah Weiss').disabled).toBe(true);
+  });
+
+  it('emits a deactivation for an active member', async () => {
+    const element = await render([jonah]);
+    const changes: ActiveChange[] = [];
+    fixture.componentInstance.activeChanged.subscribe((change) => changes.push(change));
+
+    button(element, 'Deactivate Jonah Weiss').click();
+
+    expect(changes).toEqual([{ memberId: jonah.id, active: false }]);
+  });
+
+  it('shows the reset-requested marker and emits a reset link request', async () => {
+    const element = await render([ada]);
+    const requested: number[] = [];
+    fixture.componentInstance.resetLinkRequested.subscribe((id) => requested.push(id));
+
+    button(element, 'Issue a password reset link for Ada Okafor').click();
+
+    expect(element.textContent).toContain('Reset requested');
+    expect(requested).toEqual([ada.id]);
+  });
+
+  it('disables the actions of a member whose change is being saved', async () => {
+    const element = await render([jonah], [jonah.id]);
+
+    expect(button(element, 'Deactivate Jonah Weiss').disabled).toBe(true);
+    expect(button(element, 'brewer role for Jonah Weiss').disabled).toBe(true);
+  });
+});

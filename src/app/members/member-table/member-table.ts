@@ -1,0 +1,61 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
+import { MatButton } from '@angular/material/button';
+import { MatIcon } from '@angular/material/icon';
+import { Role, ROLES } from '@shared/auth';
+import { Member } from '@shared/members';
+
+/** A role change asked for on one member. */
+export interface RolesChange {
+  memberId: number;
+  roles: Role[];
+}
+
+/** A deactivation or reactivation asked for on one member. */
+export interface ActiveChange {
+  memberId: number;
+  active: boolean;
+}
+
+/** The people of the co-op with their roles, state and the officer's actions on them. */
+@Component({
+  selector: 'cw-member-table',
+  imports: [MatButton, MatIcon, DatePipe],
+  templateUrl: './member-table.html',
+  styleUrl: './member-table.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class MemberTable {
+  readonly members = input.required<readonly Member[]>();
+  readonly savingMemberIds = input<readonly number[]>([]);
+  readonly currentUserId = input<number | null>(null);
+  readonly rolesChanged = output<RolesChange>();
+  readonly activeChanged = output<ActiveChange>();
+  readonly resetLinkRequested = output<number>();
+
+  protected readonly rows = computed(() => {
+    const saving = this.savingMemberIds();
+    return this.members().map((member) => ({
+      member,
+      saving: saving.includes(member.id),
+      isYou: member.id === this.currentUserId(),
+      roles: ROLES.map((role) => ({
+        role,
+        held: member.roles.includes(role),
+        // A person keeps at least one role; removing the last one is not offered.
+        locked: member.roles.length === 1 && member.roles.includes(role),
+      })),
+    }));
+  });
+
+  protected toggleRole(member: Member, role: Role): void {
+    const roles = member.roles.includes(role)
+      ? member.roles.filter((each) => each !== role)
+      : ROLES.filter((each) => each === role || member.roles.includes(each));
+    this.rolesChanged.emit({ memberId: member.id, roles });
+  }
+
+  protected toggleActive(member: Member): void {
+    this.activeChanged.emit({ memberId: member.id, active: !member.active });
+  }
+}

@@ -1,0 +1,161 @@
+import { HttpErrorResponse } from '@angular/common/http';
+import { inject } from '@angular/core';
+import { Actions, createEffect, ofType } from '@ngrx/effects';
+import { catchError, exhaustMap, map, mergeMap, of, switchMap, tap } from 'rxjs';
+import { apiErrorBody, apiErrorMessage } from '@app/core/api-error-message';
+import { Notifier } from '@app/core/notifier';
+import { MembersClient } from '../members-client';
+import { MembersApiActions } from './members-api.actions';
+import { MembersPageActions } from './members-page.actions';
+
+const NOTICE_DURATION_MS = 6000;
+
+/** The server's refusal in words; the last-admin rule gets a plain fallback of its own. */
+function failureMessage(error: unknown, fallback: string): string {
+  if (apiErrorBody(error)?.error.code === 'last-admin') {
+    return apiErrorMessage(error, 'The co-op must keep at least one active admin.');
+  }
+  if (error instanceof HttpErrorResponse && error.status === 403) {
+    return apiErrorMessage(error, 'You are not allowed to do that.');
+  }
+  return apiErrorMessage(error, fallback);
+}
+
+export const loadMembers = createEffect(
+  (actions$ = inject(Actions), client = inject(MembersClient)) =>
+    actions$.pipe(
+      ofType(MembersPageActions.opened),
+      switchMap(() =>
+        client.list().pipe(
+          map((response) => MembersApiActions.membersLoadedSuccess({ response })),
+          catchError((error: unknown) =>
+            of(MembersApiActions.membersLoadedFailure({ message: failureMessage(error, 'The members could not be loaded.') })),
+          ),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+export const updateMember = createEffect(
+  (actions$ = inject(Actions), client = inject(MembersClient)) =>
+    actions$.pipe(
+      ofType(MembersPageActions.rolesChanged, MembersPageActions.activeChanged),
+      mergeMap((action) => {
+        const request = 'roles' in action ? { roles: action.roles } : { active: action.active };
+        return client.update(action.memberId, request).pipe(
+          map((member) => MembersApiActions.memberUpdatedSuccess({ member })),
+          catchError((error: unknown) =>
+            of(
+              MembersApiActions.memberUpdatedFailure({
+                memberId: action.memberId,
+                message: failureMessage(error, 'The change could not be saved.'),
+              }),
+            ),
+          ),
+        );
+      }),
+    ),
+  { functional: true },
+);
+
+export const issueResetLink = createEffect(
+  (actions$ = inject(Actions), client = inject(MembersClient)) =>
+    actions$.pipe(
+      ofType(MembersPageActions.resetLinkRequested),
+      mergeMap(({ memberId }) =>
+        client.issuePasswordReset(memberId).pipe(
+          map((reset) => MembersApiActions.resetLinkIssuedSuccess({ memberId, reset })),
+          catchError((error: unknown) =>
+            of(
+              MembersApiActions.resetLinkIssuedFailure({
+                memberId,
+                message: failureMessage(error, 'The reset link could not be issued.'),
+              }),
+            ),
+          ),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+export const createInvitation = createEffect(
+  (actions$ = inject(Actions), client = inject(MembersClient)) =>
+    actions$.pipe(
+      ofType(MembersPageActions.invitationSubmitted),
+      exhaustMap(({ request }) =>
+        client.invite(request).pipe(
+          map((invitation) => MembersApiActions.invitationCreatedSuccess({ invitation })),
+          catchError((error: unknown) =>
+            of(MembersApiActions.invitationCreatedFailure({ message: failureMessage(error, 'The invitation could not be created.') })),
+          ),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+export const revokeInvitation = createEffect(
+  (actions$ = inject(Actions), client = inject(MembersClient)) =>
+    actions$.pipe(
+      ofType(MembersPageActions.invitationRevoked),
+      mergeMap(({ invitationId }) =>
+        client.revokeInvitation(invitationId).pipe(
+          map(() => MembersApiActions.invitationRevokedSuccess({ invitationId })),
+          catchError((error: unknown) =>
+            of(MembersApiActions.invitationRevokedFailure({ message: failureMessage(error, 'The invitation could not be revoked.') })),
+          ),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+export const showSuccess = createEffect(
+  (actions$ = inject(Actions), notifier = inject(Notifier)) =>
+    actions$.pipe(
+      ofType(
+        MembersApiActions.memberUpdatedSuccess,
+        MembersApiActions.invitationCreatedSuccess,
+        MembersApiActions.invitationRevokedSuccess,
+        MembersPageActions.issuedLinkCopied,
+      ),
+      tap((action) => notifier.notify(successMessage(action), NOTICE_DURATION_MS)),
+    ),
+  { functional: true, dispatch: false },
+);
+
+function successMessage(
+  action:
+    | ReturnType<typeof MembersApiActions.memberUpdatedSuccess>
+    | ReturnType<typeof MembersApiActions.invitationCreatedSuccess>
+    | ReturnType<typeof MembersApiActions.invitationRevokedSuccess>
+    | ReturnType<typeof MembersPageActions.issuedLinkCopied>,
+): string {
+  switch (action.type) {
+    case MembersApiActions.memberUpdatedSuccess.type:
+      return `Saved the changes to ${action.member.name}.`;
+    case MembersApiActions.invitationCreatedSuccess.type:
+      return `Invitation for ${action.invitation.email} created.`;
+    case MembersApiActions.invitationRevokedSuccess.type:
+      return 'Invitation revoked.';
+    default:
+      return action.copied ? 'Link copied.' : 'The link could not be copied; select it and copy it by hand.';
+  }
+}
+
+export const showFailure = createEffect(
+  (actions$ = inject(Actions), notifier = inject(Notifier)) =>
+    actions$.pipe(
+      ofType(
+        MembersApiActions.membersLoadedFailure,
+        MembersApiActions.memberUpdatedFailure,
+        MembersApiActions.resetLinkIssuedFailure,
+        MembersApiActions.invitationCreatedFailure,
+        MembersApiActions.invitationRevokedFailure,
+      ),
+      tap(({ message }) => notifier.notify(message, NOTICE_DURATION_MS)),
+    ),
+  { functional: true, dispatch: false },
+);
