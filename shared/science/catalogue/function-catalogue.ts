@@ -30,4 +30,3 @@ export function evaluateByName(name: string, args: Record<string, unknown>): unk
   return entry.call(args);
 }
 
-export { ScienceRangeError };
