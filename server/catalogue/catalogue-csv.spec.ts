@@ -1,0 +1,37 @@
+import { parseCatalogueCsv } from './catalogue-csv';
+import { CATALOGUE_KINDS } from './catalogue-kinds';
+
+describe('parseCatalogueCsv', () => {
+  const hops = CATALOGUE_KINDS.hops;
+
+  it('when every row is valid, then rows come back typed with their line numbers', () => {
+    const result = parseCatalogueCsv(hops, 'name,alphaAcidPercent,form\nBitter one,12.5,pellet\n"Aroma, whole",4,whole\n');
+    expect(result.problems).toEqual([]);
+    expect(result.rows).toEqual([
+      { line: 2, entry: { name: 'Bitter one', alphaAcidPercent: 12.5, form: 'pellet' } },
+      { line: 3, entry: { name: 'Aroma, whole', alphaAcidPercent: 4, form: 'whole' } },
+    ]);
+  });
+
+  it('when a decimal comma is used, then it is read as a decimal point', () => {
+    expect(parseCatalogueCsv(hops, 'name,alphaAcidPercent,form\nComma hop,"5,5",pellet').rows[0].entry.alphaAcidPercent).toBe(5.5);
+  });
+
+  it('when rows are bad, then each is reported by its line with the field and reason', () => {
+    const result = parseCatalogueCsv(hops, 'name,alphaAcidPercent,form\nGood,5,pellet\n,5,pellet\nHigh,abc,pellet\nGood,6,cone');
+    expect(result.problems.map((p) => p.line)).toEqual([3, 4, 5]);
+    expect(result.problems[1].reason).toContain('alphaAcidPercent');
+    expect(result.problems[2].reason).toBe('form must be one of pellet, whole, extract');
+  });
+
+  it('when a name appears twice in the file, then the second line is reported', () => {
+    const result = parseCatalogueCsv(hops, 'name,alphaAcidPercent,form\nTwin,5,pellet\ntwin,6,pellet');
+    expect(result.problems).toEqual([{ line: 3, reason: 'name "twin" appears twice in the file' }]);
+  });
+
+  it('when the file is not CSV, then line-numbered problems explain it', () => {
+    const result = parseCatalogueCsv(hops, 'name,alphaAcidPercent,form\n"unterminated,5,pellet');
+    expect(result.rows).toEqual([]);
+    expect(result.problems[0].reason).toContain('not valid CSV');
+  });
+});
