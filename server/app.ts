@@ -29,6 +29,7 @@ import { createCatalogueService } from './catalogue/catalogue.service';
 import { createPreferencesRouter } from './preferences/preferences.routes';
 import { createRecipesRouter, createRecipesService } from './recipes';
 import { createStylesRouter } from './styles/styles.routes';
+import { createStylesService } from './styles/styles.service';
 
 export interface AppDeps {
   config: Config;
@@ -102,7 +103,7 @@ export function createApp({ config, db, signInLimits, sessionCleanupMs = 15 * 60
   mountApi(app, '/api/members', createMembersRouter(createMembersService(db, invitations), resets));
   mountApi(app, '/api/preferences', createPreferencesRouter(db));
   mountApi(app, '/api/ingredients', createCatalogueRouter(createCatalogueService(db)));
-  mountApi(app, '/api/styles', createStylesRouter(db));
+  mountApi(app, '/api/styles', createStylesRouter(createStylesService(db)));
   mountApi(app, '/api/brewhouse', createBrewhouseRouter(db));
   mountApi(app, '/api/recipes', createRecipesRouter(createRecipesService(db), db));
   app.use('/api', apiNotFound);

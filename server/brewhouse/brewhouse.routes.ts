@@ -1,10 +1,10 @@
 import { Router } from 'express';
 import { Knex } from 'knex';
 import { z } from 'zod';
-import { BrewhouseSettings, DEFAULT_BREWHOUSE_SETTINGS } from '@shared/recipes';
 import { recordAudit } from '../audit/audit-log';
 import { requireRole, signedIn } from '../auth/route-access';
 import { parseRequest } from '../http/parse-request';
+import { brewhouseRepository } from './brewhouse.repository';
 
 const amount = (max: number, unit: string) => z.number('must be a number').min(0, 'must not be negative').max(max, `must be at most ${max} ${unit}`);
 
@@ -18,26 +18,17 @@ const settingsSchema = z.object({
   mashTunHeatCapacityKjPerK: amount(100, 'kJ/K').nullable(),
 });
 
-/** Loads the co-op's settings, or the defaults until someone saves them. */
-export async function loadBrewhouseSettings(db: Knex): Promise<BrewhouseSettings> {
-  const row = await db('brewhouse_settings').where({ id: 1 }).first();
-  return row ? { ...DEFAULT_BREWHOUSE_SETTINGS, ...(row.settings as BrewhouseSettings) } : DEFAULT_BREWHOUSE_SETTINGS;
-}
-
 /** /api/brewhouse: read by everyone, set by brewers and admins. */
 export function createBrewhouseRouter(db: Knex): Router {
   const router = Router();
 
   router.get('/', signedIn, async (_req, res) => {
-    res.json(await loadBrewhouseSettings(db));
+    res.json(await brewhouseRepository.load(db));
   });
 
   router.put('/', requireRole('brewer', 'admin'), async (req, res) => {
     const settings = parseRequest(settingsSchema, req.body);
-    await db('brewhouse_settings')
-      .insert({ id: 1, settings: JSON.stringify(settings), updated_by_user_id: req.user!.id, updated_at: new Date() })
-      .onConflict('id')
-      .merge();
+    await brewhouseRepository.save(db, settings, req.user!.id);
     await recordAudit(db, { actorUserId: req.user!.id, action: 'brewhouse-changed', subjectType: 'brewhouse', subjectId: 1 });
     res.json(settings);
   });

@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { UNIT_SYSTEMS, UserPreferences } from '@shared/recipes';
 import { signedIn } from '../auth/route-access';
 import { parseRequest } from '../http/parse-request';
+import { usersRepository } from '../users/users.repository';
 
 const preferencesSchema = z.object({ unitSystem: z.enum(UNIT_SYSTEMS, `must be one of ${UNIT_SYSTEMS.join(', ')}`) });
 
@@ -12,14 +13,13 @@ export function createPreferencesRouter(db: Knex): Router {
   const router = Router();
 
   router.get('/', signedIn, async (req, res) => {
-    const row = await db('users').where({ id: req.user!.id }).first('unit_system');
-    const body: UserPreferences = { unitSystem: row?.unit_system ?? 'metric' };
+    const body: UserPreferences = { unitSystem: await usersRepository.unitSystem(db, req.user!.id) };
     res.json(body);
   });
 
   router.put('/', signedIn, async (req, res) => {
     const preferences = parseRequest(preferencesSchema, req.body);
-    await db('users').where({ id: req.user!.id }).update({ unit_system: preferences.unitSystem });
+    await usersRepository.update(db, req.user!.id, { unit_system: preferences.unitSystem });
     res.json(preferences);
   });
 

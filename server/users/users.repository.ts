@@ -77,8 +77,12 @@ export const usersRepository = {
     await db('user_roles').insert(roles.map((role) => ({ user_id: userId, role })));
   },
 
-  async update(db: Knex, userId: number, changes: Partial<Pick<UserRow, 'active' | 'password_hash' | 'password_reset_requested_at'>>): Promise<void> {
+  async update(db: Knex, userId: number, changes: Partial<Pick<UserRow, 'active' | 'password_hash' | 'password_reset_requested_at' | 'unit_system'>>): Promise<void> {
     await db('users').where({ id: userId }).update({ ...changes, updated_at: new Date() });
+  },
+
+  async unitSystem(db: Knex, userId: number): Promise<UserRow['unit_system']> {
+    return (await db('users').where({ id: userId }).first('unit_system'))?.unit_system ?? 'metric';
   },
 
   /** Active admins, locked for the rest of the transaction so two officers cannot both demote the last one. */
