@@ -26,6 +26,9 @@ export class AcceptInvitationForm {
   });
 
   protected submit(): void {
+    if (this.pending()) {
+      return;
+    }
     this.form.controls.confirm.updateValueAndValidity();
     const name = this.form.controls.name.value.trim();
     if (this.form.invalid || !name) {

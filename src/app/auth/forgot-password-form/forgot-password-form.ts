@@ -21,6 +21,9 @@ export class ForgotPasswordForm {
   });
 
   protected submit(): void {
+    if (this.pending()) {
+      return;
+    }
     if (this.form.invalid) {
       this.form.markAllAsTouched();
       return;

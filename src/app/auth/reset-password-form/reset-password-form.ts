@@ -25,6 +25,9 @@ export class ResetPasswordForm {
   });
 
   protected submit(): void {
+    if (this.pending()) {
+      return;
+    }
     this.form.controls.confirm.updateValueAndValidity();
     if (this.form.invalid) {
       this.form.markAllAsTouched();

@@ -29,6 +29,10 @@ export class SignInForm {
   });
 
   protected submit(): void {
+    // The button stays enabled (and focused) while waiting; a second press is simply ignored.
+    if (this.pending()) {
+      return;
+    }
     if (this.form.invalid) {
       this.form.markAllAsTouched();
       return;

@@ -65,6 +65,18 @@ describe('SignInPage', () => {
     expect(store.dispatch).not.toHaveBeenCalledWith(expect.objectContaining({ type: SignInPageActions.submitted.type }));
   });
 
+  it('ignores a second submit while the first sign-in is on its way, keeping the button usable', async () => {
+    const element = await render({ signingIn: true });
+    fill(element, 'email', 'priya.raman@fernhollow.example');
+    fill(element, 'password', 'correct horse battery');
+
+    submitButton(element).click();
+    await fixture.whenStable();
+
+    expect(submitButton(element).disabled).toBe(false);
+    expect(store.dispatch).not.toHaveBeenCalledWith(expect.objectContaining({ type: SignInPageActions.submitted.type }));
+  });
+
   it('shows the refusal from the server and the wait it asks for', async () => {
     const element = await render({ signInError: 'Too many attempts.', retryAfterSeconds: 300 });
 

@@ -45,6 +45,9 @@ export class InviteForm {
   }
 
   protected submit(): void {
+    if (this.pending()) {
+      return;
+    }
     if (this.form.invalid) {
       this.form.markAllAsTouched();
       return;
