@@ -1,0 +1,2 @@
+export * from './reference-table-audit';
+export { redlichKisterExcessVolume } from './redlich-kister';
