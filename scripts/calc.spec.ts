@@ -41,7 +41,22 @@ describe('runCalc', () => {
   it('rejects an unknown function, an unknown parameter and a non-numeric value', () => {
     expect(runCalc(['noSuchThing']).exitCode).toBe(1);
     expect(JSON.parse(runCalc(['platoFromSg', '--sg', '1.05', '--colour', '3']).output).error.message).toMatch(/--colour/);
-    expect(runCalc(['platoFromSg', '--sg', 'heavy']).exitCode).toBe(2);
+    expect(JSON.parse(runCalc(['platoFromSg', '--sg', 'heavy']).output).error.message).toMatch(/sg is required and must be a number/);
+  });
+
+  // Hand-worked Tinseth example (see shared/science/recipe/bitterness.spec.ts): two 28 g, 6 %, 60 min additions
+  // in 20 L at 1.050 give 2 × 19.38 IBU.
+  it('takes an array parameter as JSON', () => {
+    const additions = JSON.stringify([{ grams: 28, alphaPercent: 6, minutes: 60 }, { grams: 28, alphaPercent: 6, minutes: 60 }]);
+    const { exitCode, output } = runCalc(['totalTinsethIbu', '--additions', additions, '--boilGravity', '1.05', '--litres', '20']);
+    expect(exitCode).toBe(0);
+    expect(JSON.parse(output).result).toBeCloseTo(38.75, 1);
+  });
+
+  it('takes a text choice', () => {
+    const { exitCode, output } = runCalc(['primingSugar', '--litres', '20', '--targetVolumes', '2.5', '--highestTemperature', '20', '--sugar', 'dextrose-monohydrate']);
+    expect(exitCode).toBe(0);
+    expect(JSON.parse(output).result.grams).toBeGreaterThan(0);
   });
 
   it('reports a missing parameter by name', () => {

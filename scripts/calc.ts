@@ -19,12 +19,10 @@ function parseValue(name: string, raw: string | undefined): unknown {
       throw new UsageError(`--${name} is not valid JSON: ${raw}`);
     }
   }
+  // Anything that is not a number stays text; the function's catalogue entry says what it takes.
   const value = Number(raw);
-  if (raw.trim() === '' || Number.isNaN(value)) {
-    if (raw === 'NaN') return Number.NaN;
-    throw new UsageError(`--${name} must be a number, got "${raw}"`);
-  }
-  return value;
+  if (raw === 'NaN') return Number.NaN;
+  return raw.trim() === '' || Number.isNaN(value) ? raw : value;
 }
 
 function parseArguments(argv: string[]): { name?: string; list: boolean; args: Record<string, unknown> } {

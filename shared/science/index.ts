@@ -3,4 +3,8 @@ export * from './water-density';
 export * from './gravity';
 export * from './ethanol-water';
 export * from './strength';
+export * from './recipe';
+export * from './carbonation';
+export * from './uncertainty';
+export * from './table-audit';
 export * from './catalogue';

@@ -4,7 +4,7 @@ import { ScienceRangeError } from '../units/science-range-error';
 export interface CatalogueParameter {
   name: string;
   unit: string;
-  kind: 'number' | 'json';
+  kind: 'number' | 'json' | 'text';
   optional?: boolean;
   description?: string;
 }
@@ -40,6 +40,25 @@ export function arg(args: Record<string, unknown>, name: string): number {
 /** Reads an optional numeric argument (undefined lets the function's default apply). */
 export function optionalArg(args: Record<string, unknown>, name: string): number | undefined {
   return args[name] === undefined ? undefined : arg(args, name);
+}
+
+/** Shorthand for a JSON parameter (an array or object given as JSON text on the command line). */
+export function json(name: string, unit: string, description?: string, optional = false): CatalogueParameter {
+  return { name, unit, kind: 'json', description, optional };
+}
+
+/** Shorthand for an optional text parameter, such as a choice from a list. */
+export function text(name: string, unit: string, description?: string): CatalogueParameter {
+  return { name, unit, kind: 'text', optional: true, description };
+}
+
+/** Reads a JSON argument (already parsed), throwing a ScienceRangeError that names it when missing or not an object. */
+export function jsonArg<T>(args: Record<string, unknown>, name: string): T {
+  const value = args[name];
+  if (typeof value !== 'object' || value === null) {
+    throw new ScienceRangeError(name, Number.NaN, -Infinity, Infinity, '', 'not-a-number', `${name} is required as JSON (an array or object)`);
+  }
+  return value as T;
 }
 
 /** Builds an entry for a function whose parameters are all numbers, passed in order. */

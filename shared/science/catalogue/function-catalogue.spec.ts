@@ -19,7 +19,7 @@ describe('FUNCTION_CATALOGUE', () => {
   it('gives every parameter a unit field and a kind', () => {
     for (const p of describeCatalogue().flatMap((e) => e.parameters)) {
       expect(typeof p.unit).toBe('string');
-      expect(['number', 'json']).toContain(p.kind);
+      expect(['number', 'json', 'text']).toContain(p.kind);
     }
   });
 });

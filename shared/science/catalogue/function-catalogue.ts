@@ -2,10 +2,12 @@ import type { CatalogueEntry } from './catalogue-entry';
 import { ETHANOL_WATER_ENTRIES } from './ethanol-water-entries';
 import { GRAVITY_ENTRIES } from './gravity-entries';
 import { STRENGTH_ENTRIES } from './strength-entries';
+import { RECIPE_ENTRIES } from './recipe-entries';
+import { CARBONATION_ENTRIES } from './carbonation-entries';
 
 /** Every public function that can be called by name, in a stable order. */
 export const FUNCTION_CATALOGUE: readonly CatalogueEntry[] = [
-  ...GRAVITY_ENTRIES, ...ETHANOL_WATER_ENTRIES, ...STRENGTH_ENTRIES,
+  ...GRAVITY_ENTRIES, ...ETHANOL_WATER_ENTRIES, ...STRENGTH_ENTRIES, ...RECIPE_ENTRIES, ...CARBONATION_ENTRIES,
 ];
 
 /** A catalogue listing without the callables, ready to print as JSON. */

@@ -1,0 +1,3 @@
+export * from './co2-solubility';
+export * from './priming';
+export * from './keg-pressure';

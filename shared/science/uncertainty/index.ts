@@ -1,0 +1,2 @@
+export * from './measurement-uncertainty';
+export * from './strength-uncertainty';
