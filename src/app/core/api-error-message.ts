@@ -12,6 +12,11 @@ export function apiErrorMessage(error: unknown, fallback: string): string {
   return apiErrorBody(error)?.error.message || fallback;
 }
 
+/** The reasons the server gave per request field (400 `validation-failed`), when it gave any. */
+export function apiFieldErrors(error: unknown): Record<string, string> | null {
+  return apiErrorBody(error)?.fields ?? null;
+}
+
 /** The `{ error: { code, message } }` body of an API refusal, when it has one. */
 export function apiErrorBody(error: unknown): ApiErrorBody | null {
   if (!(error instanceof HttpErrorResponse)) {

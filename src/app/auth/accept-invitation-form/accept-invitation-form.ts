@@ -1,9 +1,10 @@
-import { ChangeDetectionStrategy, Component, inject, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, effect, inject, input, output } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { AcceptInvitationRequest, PASSWORD_MIN_LENGTH } from '@shared/auth';
+import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
 import { confirmPasswordValidator } from '../confirm-password-validator';
 
 /** The invited person's name and a password, typed twice. */
@@ -16,6 +17,7 @@ import { confirmPasswordValidator } from '../confirm-password-validator';
 export class AcceptInvitationForm {
   readonly pending = input(false);
   readonly error = input<string | null>(null);
+  readonly fieldErrors = input<FieldErrors | null>(null);
   readonly submitted = output<AcceptInvitationRequest>();
 
   protected readonly minLength = PASSWORD_MIN_LENGTH;
@@ -24,6 +26,10 @@ export class AcceptInvitationForm {
     password: ['', [Validators.required, Validators.minLength(PASSWORD_MIN_LENGTH)]],
     confirm: ['', [Validators.required, confirmPasswordValidator]],
   });
+
+  constructor() {
+    effect(() => applyServerFieldErrors(this.form, this.fieldErrors()));
+  }
 
   protected submit(): void {
     if (this.pending()) {

@@ -26,6 +26,7 @@ export class AcceptInvitationPage implements OnInit {
   protected readonly status = this.store.selectSignal(accountFeature.selectInvitationStatus);
   protected readonly submitting = this.store.selectSignal(accountFeature.selectSubmitting);
   protected readonly error = this.store.selectSignal(accountFeature.selectError);
+  protected readonly fieldErrors = this.store.selectSignal(accountFeature.selectFieldErrors);
 
   ngOnInit(): void {
     this.store.dispatch(AcceptInvitationPageActions.opened({ token: this.token() }));

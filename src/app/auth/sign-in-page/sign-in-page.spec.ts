@@ -83,6 +83,18 @@ describe('SignInPage', () => {
     expect(element.querySelector('[role="alert"]')?.textContent).toMatch(/Too many attempts\.\s+You can try again in about 5 minutes\./);
   });
 
+  it('shows the reason the server gave for a field at that field', async () => {
+    const element = await render();
+    fill(element, 'email', 'priya@fernhollow');
+    fill(element, 'password', 'correct horse battery');
+
+    store.overrideSelector(authFeature.selectSignInFieldErrors, { email: 'Give a full e-mail address.' });
+    store.refreshState();
+    await fixture.whenStable();
+
+    expect(element.querySelector('mat-error')?.textContent).toContain('Give a full e-mail address.');
+  });
+
   it('updates the shown refusal when the store changes', async () => {
     const element = await render();
 

@@ -23,6 +23,7 @@ export class SignInPage implements OnInit {
   protected readonly signingIn = this.store.selectSignal(authFeature.selectSigningIn);
   protected readonly error = this.store.selectSignal(authFeature.selectSignInError);
   protected readonly retryAfterSeconds = this.store.selectSignal(authFeature.selectRetryAfterSeconds);
+  protected readonly fieldErrors = this.store.selectSignal(authFeature.selectSignInFieldErrors);
 
   ngOnInit(): void {
     this.store.dispatch(SignInPageActions.opened());

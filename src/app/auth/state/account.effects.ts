@@ -3,7 +3,7 @@ import { inject } from '@angular/core';
 import { Router } from '@angular/router';
 import { Actions, createEffect, ofType } from '@ngrx/effects';
 import { catchError, exhaustMap, map, of, switchMap, tap } from 'rxjs';
-import { apiErrorMessage } from '@app/core/api-error-message';
+import { apiErrorMessage, apiFieldErrors } from '@app/core/api-error-message';
 import { Notifier } from '@app/core/notifier';
 import { AuthClient } from '../auth-client';
 import { AcceptInvitationPageActions } from './accept-invitation-page.actions';
@@ -45,10 +45,15 @@ export const acceptInvitation = createEffect(
           map(({ user }) =>
             user
               ? AuthApiActions.invitationAcceptedSuccess({ user })
-              : AuthApiActions.invitationAcceptedFailure({ message: 'Joining failed. Try again.' }),
+              : AuthApiActions.invitationAcceptedFailure({ message: 'Joining failed. Try again.', fields: null }),
           ),
           catchError((error: unknown) =>
-            of(AuthApiActions.invitationAcceptedFailure({ message: apiErrorMessage(error, 'Joining failed. Try again.') })),
+            of(
+              AuthApiActions.invitationAcceptedFailure({
+                message: apiErrorMessage(error, 'Joining failed. Try again.'),
+                fields: apiFieldErrors(error),
+              }),
+            ),
           ),
         ),
       ),

@@ -1,6 +1,7 @@
 import { createFeature, createReducer, on } from '@ngrx/store';
 import { InvitationPreview } from '@shared/auth';
 import { AcceptInvitationPageActions } from './accept-invitation-page.actions';
+import { FieldErrors } from '@app/ui/server-field-errors';
 import { AuthApiActions } from './auth-api.actions';
 import { ForgotPasswordPageActions } from './forgot-password-page.actions';
 import { ResetPasswordPageActions } from './reset-password-page.actions';
@@ -13,6 +14,8 @@ export interface AccountState {
   invitationStatus: InvitationStatus;
   submitting: boolean;
   error: string | null;
+  /** Reasons per field from a 400 answer to the invitation form. */
+  fieldErrors: FieldErrors | null;
   resetRequested: boolean;
 }
 
@@ -21,6 +24,7 @@ export const initialAccountState: AccountState = {
   invitationStatus: 'loading',
   submitting: false,
   error: null,
+  fieldErrors: null,
   resetRequested: false,
 };
 
@@ -48,7 +52,7 @@ export const accountFeature = createFeature({
       AcceptInvitationPageActions.submitted,
       ForgotPasswordPageActions.submitted,
       ResetPasswordPageActions.submitted,
-      (state): AccountState => ({ ...state, submitting: true, error: null }),
+      (state): AccountState => ({ ...state, submitting: true, error: null, fieldErrors: null }),
     ),
     on(AuthApiActions.invitationAcceptedSuccess, AuthApiActions.passwordResetSuccess, (state): AccountState => ({
       ...state,
@@ -59,8 +63,13 @@ export const accountFeature = createFeature({
       submitting: false,
       resetRequested: true,
     })),
+    on(AuthApiActions.invitationAcceptedFailure, (state, { message, fields }): AccountState => ({
+      ...state,
+      submitting: false,
+      error: message,
+      fieldErrors: fields,
+    })),
     on(
-      AuthApiActions.invitationAcceptedFailure,
       AuthApiActions.resetRequestedFailure,
       AuthApiActions.passwordResetFailure,
       (state, { message }): AccountState => ({ ...state, submitting: false, error: message }),

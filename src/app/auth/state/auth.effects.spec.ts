@@ -66,7 +66,7 @@ describe('auth effects', () => {
 
       const result = await firstValueFrom(signIn(actionsOf(submitted), client));
 
-      expect(result).toEqual(AuthApiActions.signInFailure({ message: 'E-mail or password is wrong.', retryAfterSeconds: null }));
+      expect(result).toEqual(AuthApiActions.signInFailure({ message: 'E-mail or password is wrong.', retryAfterSeconds: null, fields: null }));
     });
 
     it('maps a 429 to Sign In Failure keeping retryAfterSeconds', async () => {
@@ -75,7 +75,18 @@ describe('auth effects', () => {
 
       const result = await firstValueFrom(signIn(actionsOf(submitted), client));
 
-      expect(result).toEqual(AuthApiActions.signInFailure({ message: 'Too many attempts.', retryAfterSeconds: 300 }));
+      expect(result).toEqual(AuthApiActions.signInFailure({ message: 'Too many attempts.', retryAfterSeconds: 300, fields: null }));
+    });
+
+    it('maps a 400 to Sign In Failure keeping the reasons per field', async () => {
+      const body = { error: { code: 'validation-failed', message: 'Check the form.' }, fields: { email: 'Give a full address.' } };
+      const client = fakeClient({ signIn: () => throwError(() => refusal(400, body)) });
+
+      const result = await firstValueFrom(signIn(actionsOf(submitted), client));
+
+      expect(result).toEqual(
+        AuthApiActions.signInFailure({ message: 'Check the form.', retryAfterSeconds: null, fields: { email: 'Give a full address.' } }),
+      );
     });
 
     it('ignores further submissions while a sign-in is on its way (exhaustMap)', () => {

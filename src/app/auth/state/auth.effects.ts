@@ -3,7 +3,7 @@ import { inject } from '@angular/core';
 import { Router } from '@angular/router';
 import { Actions, createEffect, ofType, ROOT_EFFECTS_INIT } from '@ngrx/effects';
 import { catchError, exhaustMap, map, of, tap } from 'rxjs';
-import { apiErrorBody, apiErrorMessage } from '@app/core/api-error-message';
+import { apiErrorBody, apiErrorMessage, apiFieldErrors } from '@app/core/api-error-message';
 import { Notifier } from '@app/core/notifier';
 import { ShellActions } from '@app/core/shell/shell.actions';
 import { AuthClient } from '../auth-client';
@@ -39,7 +39,7 @@ export const signIn = createEffect(
           map(({ user }) =>
             user
               ? AuthApiActions.signInSuccess({ user, returnUrl })
-              : AuthApiActions.signInFailure({ message: 'Signing in failed. Try again.', retryAfterSeconds: null }),
+              : AuthApiActions.signInFailure({ message: 'Signing in failed. Try again.', retryAfterSeconds: null, fields: null }),
           ),
           catchError((error: unknown) => of(signInFailure(error))),
         ),
@@ -55,7 +55,11 @@ function signInFailure(error: unknown) {
     error instanceof HttpErrorResponse && error.status === 401
       ? 'That e-mail and password do not match.'
       : 'Signing in failed. Try again.';
-  return AuthApiActions.signInFailure({ message: apiErrorMessage(error, fallback), retryAfterSeconds });
+  return AuthApiActions.signInFailure({
+    message: apiErrorMessage(error, fallback),
+    retryAfterSeconds,
+    fields: apiFieldErrors(error),
+  });
 }
 
 export const signOut = createEffect(

@@ -1,3 +1,5 @@
+import { MembersApiActions } from '@app/members/state/members-api.actions';
+import { generateMockMember } from '@app/testing/member-mock';
 import { generateMockSessionUser } from '@app/testing/session-user-mock';
 import { AuthApiActions } from './auth-api.actions';
 import { authFeature, AuthState, initialAuthState } from './auth.feature';
@@ -35,7 +37,7 @@ describe('authFeature reducer', () => {
   it('keeps the message and the wait of a refused sign-in', () => {
     const before: AuthState = { ...initialAuthState, signingIn: true };
 
-    const state = reducer(before, AuthApiActions.signInFailure({ message: 'Too many attempts.', retryAfterSeconds: 120 }));
+    const state = reducer(before, AuthApiActions.signInFailure({ message: 'Too many attempts.', retryAfterSeconds: 120, fields: null }));
 
     expect(state).toMatchObject({ signingIn: false, signInError: 'Too many attempts.', retryAfterSeconds: 120 });
   });
@@ -47,6 +49,23 @@ describe('authFeature reducer', () => {
 
     expect(state.user).toEqual(user);
     expect(state.sessionLoaded).toBe(true);
+  });
+
+  it('follows a change an admin made to their own roles on the Members page', () => {
+    const me = generateMockSessionUser(['member', 'admin'], { id: 21 });
+    const signedIn: AuthState = { ...initialAuthState, sessionLoaded: true, user: me };
+
+    const state = reducer(signedIn, MembersApiActions.memberUpdatedSuccess({ member: generateMockMember({ id: 21, roles: ['member'] }) }));
+
+    expect(state.user?.roles).toEqual(['member']);
+  });
+
+  it('ignores a change made to someone else', () => {
+    const signedIn: AuthState = { ...initialAuthState, sessionLoaded: true, user: generateMockSessionUser(['admin'], { id: 1 }) };
+
+    const state = reducer(signedIn, MembersApiActions.memberUpdatedSuccess({ member: generateMockMember({ id: 21 }) }));
+
+    expect(state).toBe(signedIn);
   });
 
   it('forgets the person on sign-out and on an expired session', () => {

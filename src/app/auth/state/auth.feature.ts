@@ -1,5 +1,7 @@
 import { createFeature, createReducer, createSelector, on } from '@ngrx/store';
 import { Role, SessionUser } from '@shared/auth';
+import { FieldErrors } from '@app/ui/server-field-errors';
+import { MembersApiActions } from '@app/members/state/members-api.actions';
 import { AuthApiActions } from './auth-api.actions';
 import { SignInPageActions } from './sign-in-page.actions';
 
@@ -11,6 +13,8 @@ export interface AuthState {
   signingIn: boolean;
   signInError: string | null;
   retryAfterSeconds: number | null;
+  /** Reasons per sign-in field from a 400 answer. */
+  signInFieldErrors: FieldErrors | null;
 }
 
 export const initialAuthState: AuthState = {
@@ -19,6 +23,7 @@ export const initialAuthState: AuthState = {
   signingIn: false,
   signInError: null,
   retryAfterSeconds: null,
+  signInFieldErrors: null,
 };
 
 const noRoles: readonly Role[] = [];
@@ -29,12 +34,18 @@ export const authFeature = createFeature({
     initialAuthState,
     on(AuthApiActions.sessionLoadedSuccess, (state, { user }): AuthState => ({ ...state, user, sessionLoaded: true })),
     on(AuthApiActions.sessionLoadedFailure, (state): AuthState => ({ ...state, user: null, sessionLoaded: true })),
-    on(SignInPageActions.opened, (state): AuthState => ({ ...state, signInError: null, retryAfterSeconds: null })),
+    on(SignInPageActions.opened, (state): AuthState => ({
+      ...state,
+      signInError: null,
+      retryAfterSeconds: null,
+      signInFieldErrors: null,
+    })),
     on(SignInPageActions.submitted, (state): AuthState => ({
       ...state,
       signingIn: true,
       signInError: null,
       retryAfterSeconds: null,
+      signInFieldErrors: null,
     })),
     on(AuthApiActions.signInSuccess, AuthApiActions.invitationAcceptedSuccess, (state, { user }): AuthState => ({
       ...state,
@@ -42,12 +53,19 @@ export const authFeature = createFeature({
       sessionLoaded: true,
       signingIn: false,
     })),
-    on(AuthApiActions.signInFailure, (state, { message, retryAfterSeconds }): AuthState => ({
+    on(AuthApiActions.signInFailure, (state, { message, retryAfterSeconds, fields }): AuthState => ({
       ...state,
       signingIn: false,
       signInError: message,
       retryAfterSeconds,
+      signInFieldErrors: fields,
     })),
+    // An admin who changes their own roles sees the navigation follow at once.
+    on(MembersApiActions.memberUpdatedSuccess, (state, { member }): AuthState =>
+      state.user?.id === member.id
+        ? { ...state, user: { ...state.user, name: member.name, email: member.email, roles: member.roles } }
+        : state,
+    ),
     on(AuthApiActions.signOutSuccess, AuthApiActions.sessionExpired, (): AuthState => ({
       ...initialAuthState,
       sessionLoaded: true,

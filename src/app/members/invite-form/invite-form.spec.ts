@@ -53,6 +53,15 @@ describe('InviteForm', () => {
     expect(element.textContent).toContain('Choose at least one role.');
   });
 
+  it('shows the reason the server gave for the e-mail at the field', async () => {
+    typeEmail('someone@fernhollow.example');
+
+    fixture.componentRef.setInput('fieldErrors', { email: 'This person is already a member.' });
+    await fixture.whenStable();
+
+    expect(element.querySelector('mat-error')?.textContent).toContain('This person is already a member.');
+  });
+
   it('clears itself when an invitation has been created', async () => {
     typeEmail('someone@fernhollow.example');
     fixture.componentRef.setInput('createdCount', 1);

@@ -6,6 +6,7 @@ import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { Role, ROLES } from '@shared/auth';
 import { CreateInvitationRequest } from '@shared/members';
+import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
 
 const DEFAULT_ROLES = { member: true, brewer: false, admin: false } satisfies Record<Role, boolean>;
 
@@ -25,6 +26,7 @@ export class InviteForm {
   readonly pending = input(false);
   /** Goes up by one per invitation created; the form then clears for the next one. */
   readonly createdCount = input(0);
+  readonly fieldErrors = input<FieldErrors | null>(null);
   readonly invitationSubmitted = output<CreateInvitationRequest>();
 
   protected readonly roleNames = ROLES;
@@ -34,6 +36,7 @@ export class InviteForm {
   });
 
   constructor() {
+    effect(() => applyServerFieldErrors(this.form, this.fieldErrors()));
     let seen = this.createdCount();
     effect(() => {
       const count = this.createdCount();

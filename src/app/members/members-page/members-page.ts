@@ -25,6 +25,7 @@ export class MembersPage implements OnInit {
   protected readonly loadError = this.store.selectSignal(membersFeature.selectLoadError);
   protected readonly savingMemberIds = this.store.selectSignal(membersFeature.selectSavingMemberIds);
   protected readonly inviting = this.store.selectSignal(membersFeature.selectInviting);
+  protected readonly inviteFieldErrors = this.store.selectSignal(membersFeature.selectInviteFieldErrors);
   protected readonly invitationsCreated = this.store.selectSignal(membersFeature.selectInvitationsCreated);
   protected readonly issuedLink = this.store.selectSignal(membersFeature.selectIssuedLink);
   protected readonly user = this.store.selectSignal(authFeature.selectUser);

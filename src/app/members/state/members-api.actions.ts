@@ -1,5 +1,6 @@
 import { createActionGroup, props } from '@ngrx/store';
 import { Invitation, IssuedPasswordReset, Member, MemberListResponse } from '@shared/members';
+import { FieldErrors } from '@app/ui/server-field-errors';
 
 export const MembersApiActions = createActionGroup({
   source: 'Members API',
@@ -11,7 +12,7 @@ export const MembersApiActions = createActionGroup({
     'Reset Link Issued Success': props<{ memberId: number; reset: IssuedPasswordReset }>(),
     'Reset Link Issued Failure': props<{ memberId: number; message: string }>(),
     'Invitation Created Success': props<{ invitation: Invitation }>(),
-    'Invitation Created Failure': props<{ message: string }>(),
+    'Invitation Created Failure': props<{ message: string; fields: FieldErrors | null }>(),
     'Invitation Revoked Success': props<{ invitationId: number }>(),
     'Invitation Revoked Failure': props<{ message: string }>(),
   },

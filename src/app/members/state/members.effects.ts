@@ -2,7 +2,7 @@ import { HttpErrorResponse } from '@angular/common/http';
 import { inject } from '@angular/core';
 import { Actions, createEffect, ofType } from '@ngrx/effects';
 import { catchError, exhaustMap, map, mergeMap, of, switchMap, tap } from 'rxjs';
-import { apiErrorBody, apiErrorMessage } from '@app/core/api-error-message';
+import { apiErrorBody, apiErrorMessage, apiFieldErrors } from '@app/core/api-error-message';
 import { Notifier } from '@app/core/notifier';
 import { MembersClient } from '../members-client';
 import { MembersApiActions } from './members-api.actions';
@@ -88,7 +88,12 @@ export const createInvitation = createEffect(
         client.invite(request).pipe(
           map((invitation) => MembersApiActions.invitationCreatedSuccess({ invitation })),
           catchError((error: unknown) =>
-            of(MembersApiActions.invitationCreatedFailure({ message: failureMessage(error, 'The invitation could not be created.') })),
+            of(
+              MembersApiActions.invitationCreatedFailure({
+                message: failureMessage(error, 'The invitation could not be created.'),
+                fields: apiFieldErrors(error),
+              }),
+            ),
           ),
         ),
       ),

@@ -2,6 +2,7 @@ import { createEntityAdapter, EntityState } from '@ngrx/entity';
 import { createFeature, createReducer, createSelector, on } from '@ngrx/store';
 import { Invitation, Member } from '@shared/members';
 import { AuthApiActions } from '@app/auth/state/auth-api.actions';
+import { FieldErrors } from '@app/ui/server-field-errors';
 import { MembersApiActions } from './members-api.actions';
 import { MembersPageActions } from './members-page.actions';
 
@@ -21,6 +22,8 @@ export interface MembersState extends EntityState<Member> {
   /** Members with a change on its way to the server. */
   savingMemberIds: number[];
   inviting: boolean;
+  /** Reasons per field from a 400 answer to the invite form. */
+  inviteFieldErrors: FieldErrors | null;
   /** Counts created invitations so the invite form can clear itself after each one. */
   invitationsCreated: number;
   issuedLink: IssuedLink | null;
@@ -36,6 +39,7 @@ export const initialMembersState: MembersState = membersAdapter.getInitialState(
   loadError: null,
   savingMemberIds: [],
   inviting: false,
+  inviteFieldErrors: null,
   invitationsCreated: 0,
   issuedLink: null,
 });
@@ -81,7 +85,7 @@ export const membersFeature = createFeature({
       savingMemberIds: withoutId(state.savingMemberIds, memberId),
       issuedLink: { kind: 'password-reset', email: state.entities[memberId]?.email ?? '', ...reset },
     })),
-    on(MembersPageActions.invitationSubmitted, (state): MembersState => ({ ...state, inviting: true })),
+    on(MembersPageActions.invitationSubmitted, (state): MembersState => ({ ...state, inviting: true, inviteFieldErrors: null })),
     on(MembersApiActions.invitationCreatedSuccess, (state, { invitation }): MembersState => {
       const { link, ...pending } = invitation;
       return {
@@ -94,7 +98,11 @@ export const membersFeature = createFeature({
           : state.issuedLink,
       };
     }),
-    on(MembersApiActions.invitationCreatedFailure, (state): MembersState => ({ ...state, inviting: false })),
+    on(MembersApiActions.invitationCreatedFailure, (state, { fields }): MembersState => ({
+      ...state,
+      inviting: false,
+      inviteFieldErrors: fields,
+    })),
     on(MembersApiActions.invitationRevokedSuccess, (state, { invitationId }): MembersState => ({
       ...state,
       invitations: state.invitations.filter((each) => each.id !== invitationId),

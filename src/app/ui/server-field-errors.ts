@@ -1,0 +1,18 @@
+import { FormGroup } from '@angular/forms';
+
+/** Reasons per form field, as the server gave them in a 400 answer (`fields`). */
+export type FieldErrors = Record<string, string>;
+
+/**
+ * Puts the server's reasons on the matching controls as a `server` error, so they show at the field;
+ * they clear by themselves when the person edits the field.
+ */
+export function applyServerFieldErrors(form: FormGroup, fields: FieldErrors | null): void {
+  for (const [name, reason] of Object.entries(fields ?? {})) {
+    const control = form.get(name);
+    if (control) {
+      control.setErrors({ ...control.errors, server: reason });
+      control.markAsTouched();
+    }
+  }
+}
