@@ -90,6 +90,12 @@ describe('auditDensityTable', () => {
     expect(rows[0].ethanolMolarVolume).toBeCloseTo(58.371, 2);
   });
 
+  it('flags a mid-table mistype also when the expansion runs in mole fraction', () => {
+    const clean = oimlTable(20);
+    const flagged = auditDensityTable(withDensity(clean, 30, clean[30].density - 0.3), 20, { composition: 'mole' }).flagged;
+    expect(flagged.map((r) => r.massPercent)).toEqual([30]);
+  });
+
   it('throws a ScienceRangeError for a table too short to audit', () => {
     expect(() => auditDensityTable(oimlTable(20).slice(0, 5), 20)).toThrow(ScienceRangeError);
   });
