@@ -4,3 +4,8 @@ export * from './brewhouse-settings';
 export * from './recipe-design';
 export * from './recipe';
 export * from './recipes-api';
+export * from './style-comparison';
+export * from './recipe-prediction';
+export * from './recipe-units';
+export * from './scale-recipe';
+export * from './recipe-test-data';
