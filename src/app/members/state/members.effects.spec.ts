@@ -2,12 +2,11 @@ import { HttpErrorResponse } from '@angular/common/http';
 import { Actions } from '@ngrx/effects';
 import { Action } from '@ngrx/store';
 import { firstValueFrom, Observable, of, throwError } from 'rxjs';
-import { Notifier } from '@app/core/notifier';
 import { generateMockInvitation, generateMockMember } from '@app/testing/member-mock';
 import { MembersClient } from '../members-client';
 import { MembersApiActions } from './members-api.actions';
 import { MembersPageActions } from './members-page.actions';
-import { createInvitation, loadMembers, showFailure, updateMember } from './members.effects';
+import { createInvitation, loadMembers, updateMember } from './members.effects';
 
 const actionsOf = (...actions: Action[]) => new Actions(of(...actions));
 const fakeClient = (overrides: Partial<Record<keyof MembersClient, (...args: never[]) => Observable<unknown>>>) =>
@@ -62,15 +61,5 @@ describe('members effects', () => {
 
     expect(invite).toHaveBeenCalledWith(request);
     expect(result).toEqual(MembersApiActions.invitationCreatedSuccess({ invitation }));
-  });
-
-  it('showFailure shows the refusal to the admin', async () => {
-    const notifier = { notify: jest.fn() } as unknown as Notifier;
-
-    await firstValueFrom(
-      showFailure(actionsOf(MembersApiActions.memberUpdatedFailure({ memberId: 22, message: 'Last admin.' })), notifier),
-    );
-
-    expect(notifier.notify).toHaveBeenCalledWith('Last admin.', 6000);
   });
 });

@@ -1,14 +1,11 @@
 import { HttpErrorResponse } from '@angular/common/http';
 import { inject } from '@angular/core';
 import { Actions, createEffect, ofType } from '@ngrx/effects';
-import { catchError, exhaustMap, map, mergeMap, of, switchMap, tap } from 'rxjs';
+import { catchError, exhaustMap, map, mergeMap, of, switchMap } from 'rxjs';
 import { apiErrorBody, apiErrorMessage, apiFieldErrors } from '@app/core/api-error-message';
-import { Notifier } from '@app/core/notifier';
 import { MembersClient } from '../members-client';
 import { MembersApiActions } from './members-api.actions';
 import { MembersPageActions } from './members-page.actions';
-
-const NOTICE_DURATION_MS = 6000;
 
 /** The server's refusal in words; the last-admin rule gets a plain fallback of its own. */
 function failureMessage(error: unknown, fallback: string): string {
@@ -115,52 +112,4 @@ export const revokeInvitation = createEffect(
       ),
     ),
   { functional: true },
-);
-
-export const showSuccess = createEffect(
-  (actions$ = inject(Actions), notifier = inject(Notifier)) =>
-    actions$.pipe(
-      ofType(
-        MembersApiActions.memberUpdatedSuccess,
-        MembersApiActions.invitationCreatedSuccess,
-        MembersApiActions.invitationRevokedSuccess,
-        MembersPageActions.issuedLinkCopied,
-      ),
-      tap((action) => notifier.notify(successMessage(action), NOTICE_DURATION_MS)),
-    ),
-  { functional: true, dispatch: false },
-);
-
-function successMessage(
-  action:
-    | ReturnType<typeof MembersApiActions.memberUpdatedSuccess>
-    | ReturnType<typeof MembersApiActions.invitationCreatedSuccess>
-    | ReturnType<typeof MembersApiActions.invitationRevokedSuccess>
-    | ReturnType<typeof MembersPageActions.issuedLinkCopied>,
-): string {
-  switch (action.type) {
-    case MembersApiActions.memberUpdatedSuccess.type:
-      return `Saved the changes to ${action.member.name}.`;
-    case MembersApiActions.invitationCreatedSuccess.type:
-      return `Invitation for ${action.invitation.email} created.`;
-    case MembersApiActions.invitationRevokedSuccess.type:
-      return 'Invitation revoked.';
-    default:
-      return action.copied ? 'Link copied.' : 'The link could not be copied; select it and copy it by hand.';
-  }
-}
-
-export const showFailure = createEffect(
-  (actions$ = inject(Actions), notifier = inject(Notifier)) =>
-    actions$.pipe(
-      ofType(
-        MembersApiActions.membersLoadedFailure,
-        MembersApiActions.memberUpdatedFailure,
-        MembersApiActions.resetLinkIssuedFailure,
-        MembersApiActions.invitationCreatedFailure,
-        MembersApiActions.invitationRevokedFailure,
-      ),
-      tap(({ message }) => notifier.notify(message, NOTICE_DURATION_MS)),
-    ),
-  { functional: true, dispatch: false },
 );
