@@ -1,0 +1,62 @@
+import { ChangeDetectionStrategy, Component, effect, inject, input, output, untracked } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
+import { BrewhouseSettings } from '@shared/recipes';
+
+type NumericKey = Exclude<keyof BrewhouseSettings, 'mashTunHeatCapacityKjPerK'>;
+
+/** The fields of the brewhouse settings, with the ranges the water plan accepts. */
+const FIELDS: { key: NumericKey; label: string; unit: string; min: number; max: number }[] = [
+  { key: 'boilOffLitresPerHour', label: 'Boil-off', unit: 'L/h', min: 0, max: 100 },
+  { key: 'grainAbsorptionLitresPerKg', label: 'Grain absorption', unit: 'L/kg', min: 0, max: 5 },
+  { key: 'kettleLossLitres', label: 'Kettle loss', unit: 'L', min: 0, max: 100 },
+  { key: 'fermenterLossLitres', label: 'Fermenter loss', unit: 'L', min: 0, max: 100 },
+  { key: 'mashThicknessLitresPerKg', label: 'Mash thickness', unit: 'L/kg', min: 1, max: 10 },
+  { key: 'grainTemperatureC', label: 'Grain temperature', unit: '°C', min: -10, max: 50 },
+];
+
+/** The co-op's brewhouse settings, from which every recipe's water plan follows (metric, as stored). */
+@Component({
+  selector: 'cw-brewhouse-form',
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatButton],
+  templateUrl: './brewhouse-form.html',
+  styleUrl: '../catalogue-entry-form/catalogue-entry-form.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class BrewhouseForm {
+  private readonly fb = inject(NonNullableFormBuilder);
+  readonly settings = input.required<BrewhouseSettings>();
+  readonly canEdit = input(false);
+  readonly saving = input(false);
+  readonly submitted = output<BrewhouseSettings>();
+
+  protected readonly fields = FIELDS;
+  protected readonly form = this.fb.group({
+    ...(Object.fromEntries(
+      FIELDS.map((f) => [f.key, this.fb.control<number | null>(null, [Validators.required, Validators.min(f.min), Validators.max(f.max)])]),
+    ) as Record<NumericKey, ReturnType<typeof this.fb.control<number | null>>>),
+    mashTunHeatCapacityKjPerK: this.fb.control<number | null>(null, [Validators.min(0), Validators.max(100)]),
+  });
+
+  constructor() {
+    effect(() => {
+      const settings = this.settings();
+      const canEdit = this.canEdit();
+      untracked(() => {
+        this.form.reset(settings);
+        if (canEdit) this.form.enable();
+        else this.form.disable();
+      });
+    });
+  }
+
+  protected submit(): void {
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    this.submitted.emit(this.form.getRawValue() as BrewhouseSettings);
+  }
+}

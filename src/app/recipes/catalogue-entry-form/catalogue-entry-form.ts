@@ -1,0 +1,61 @@
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, output, untracked } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
+import { MatOption, MatSelect } from '@angular/material/select';
+import {
+  FERMENTABLE_KINDS,
+  FLOCCULATION_LEVELS,
+  HOP_FORMS,
+  IngredientKind,
+  OTHER_ADDITION_KINDS,
+} from '@shared/recipes';
+import { CatalogueEntry, CatalogueEntryInput } from '../catalogue-entry';
+import { KIND_LABELS } from '../catalogue-columns';
+import { entryFormGroups, entryInputOf } from './catalogue-entry-form-groups';
+
+/** Adds or changes one catalogue entry; the fields follow the kind. */
+@Component({
+  selector: 'cw-catalogue-entry-form',
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatButton],
+  templateUrl: './catalogue-entry-form.html',
+  styleUrl: './catalogue-entry-form.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class CatalogueEntryForm {
+  readonly kind = input.required<IngredientKind>();
+  /** The entry being changed, or null to add a new one. */
+  readonly entry = input<CatalogueEntry | null>(null);
+  readonly saving = input(false);
+  /** Goes up by one per saved entry; the form then clears. */
+  readonly savedCount = input(0);
+  readonly submitted = output<CatalogueEntryInput>();
+  readonly cancelled = output<void>();
+
+  protected readonly groups = entryFormGroups(inject(NonNullableFormBuilder));
+  protected readonly options = { FERMENTABLE_KINDS, HOP_FORMS, FLOCCULATION_LEVELS, OTHER_ADDITION_KINDS };
+  protected readonly title = computed(() => `${this.entry() ? 'Change' : 'Add'} ${this.entry()?.name ?? 'a ' + KIND_LABELS[this.kind()].singular}`);
+
+  constructor() {
+    effect(() => {
+      this.savedCount();
+      const entry = this.entry();
+      const kind = this.kind();
+      untracked(() => {
+        const group = this.groups[kind];
+        group.reset();
+        if (entry) group.patchValue(entry as never);
+      });
+    });
+  }
+
+  protected submit(): void {
+    const group = this.groups[this.kind()];
+    if (group.invalid) {
+      group.markAllAsTouched();
+      return;
+    }
+    this.submitted.emit(entryInputOf(this.kind(), this.groups));
+  }
+}

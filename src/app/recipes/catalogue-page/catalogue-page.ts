@@ -1,0 +1,90 @@
+import { ChangeDetectionStrategy, Component, inject, OnInit, signal } from '@angular/core';
+import { MatButton } from '@angular/material/button';
+import { MatCheckbox } from '@angular/material/checkbox';
+import { MatFormField, MatLabel } from '@angular/material/form-field';
+import { MatIcon } from '@angular/material/icon';
+import { MatInput } from '@angular/material/input';
+import { MatTab, MatTabGroup } from '@angular/material/tabs';
+import { RouterLink } from '@angular/router';
+import { Store } from '@ngrx/store';
+import { BrewhouseSettings, INGREDIENT_KINDS, IngredientKind, StyleTarget, StyleTargetInput } from '@shared/recipes';
+import { BrewhouseForm } from '../brewhouse-form/brewhouse-form';
+import { CATALOGUE_CSV_COLUMNS, KIND_LABELS } from '../catalogue-columns';
+import { CatalogueEntry, CatalogueEntryInput } from '../catalogue-entry';
+import { CatalogueEntryForm } from '../catalogue-entry-form/catalogue-entry-form';
+import { CatalogueTable, RetiredChange } from '../catalogue-table/catalogue-table';
+import { CsvImportPreview } from '../csv-import-preview/csv-import-preview';
+import { StyleForm } from '../style-form/style-form';
+import { StyleTable } from '../style-table/style-table';
+import { CataloguePageActions } from '../state/catalogue-page.actions';
+import { selectBrewhouseOrDefault, selectCataloguePageViewModel } from '../state/catalogue.selectors';
+
+/** The co-op's ingredient catalogue by kind, its style list and brewhouse settings. */
+@Component({
+  selector: 'cw-catalogue-page',
+  imports: [CatalogueTable, CatalogueEntryForm, CsvImportPreview, StyleTable, StyleForm, BrewhouseForm, RouterLink,
+    MatTabGroup, MatTab, MatButton, MatIcon, MatCheckbox, MatFormField, MatLabel, MatInput],
+  templateUrl: './catalogue-page.html',
+  styleUrl: './catalogue-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class CataloguePage implements OnInit {
+  private readonly store = inject(Store);
+
+  protected readonly vm = this.store.selectSignal(selectCataloguePageViewModel);
+  protected readonly brewhouse = this.store.selectSignal(selectBrewhouseOrDefault);
+  protected readonly kinds = INGREDIENT_KINDS;
+  protected readonly labels = KIND_LABELS;
+  protected readonly csvColumns = CATALOGUE_CSV_COLUMNS;
+  protected readonly editing = signal<CatalogueEntry | null>(null);
+  protected readonly editingStyle = signal<StyleTarget | null>(null);
+
+  ngOnInit(): void {
+    this.store.dispatch(CataloguePageActions.opened());
+  }
+
+  protected search(search: string): void {
+    this.store.dispatch(CataloguePageActions.searchChanged({ search }));
+  }
+
+  protected includeRetired(includeRetired: boolean): void {
+    this.store.dispatch(CataloguePageActions.includeRetiredChanged({ includeRetired }));
+  }
+
+  protected saveEntry(kind: IngredientKind, input: CatalogueEntryInput): void {
+    const editing = this.editing();
+    this.editing.set(null);
+    this.store.dispatch(editing ? CataloguePageActions.entryChanged({ kind, id: editing.id, input }) : CataloguePageActions.entryAdded({ kind, input }));
+  }
+
+  protected changeRetired(kind: IngredientKind, change: RetiredChange): void {
+    this.store.dispatch(CataloguePageActions.entryRetiredChanged({ kind, ...change }));
+  }
+
+  protected async previewFile(kind: IngredientKind, input: HTMLInputElement): Promise<void> {
+    const file = input.files?.[0];
+    if (!file) return;
+    const csv = await file.text();
+    input.value = '';
+    this.store.dispatch(CataloguePageActions.importPreviewRequested({ kind, csv }));
+  }
+
+  protected confirmImport(): void {
+    const preview = this.vm().importPreview;
+    if (preview) this.store.dispatch(CataloguePageActions.importConfirmed({ kind: preview.kind, csv: preview.csv }));
+  }
+
+  protected dismissImport(): void {
+    this.store.dispatch(CataloguePageActions.importDismissed());
+  }
+
+  protected saveStyle(input: StyleTargetInput): void {
+    const editing = this.editingStyle();
+    this.editingStyle.set(null);
+    this.store.dispatch(editing ? CataloguePageActions.styleChanged({ styleId: editing.id, input }) : CataloguePageActions.styleAdded({ input }));
+  }
+
+  protected saveBrewhouse(settings: BrewhouseSettings): void {
+    this.store.dispatch(CataloguePageActions.brewhouseSaved({ settings }));
+  }
+}

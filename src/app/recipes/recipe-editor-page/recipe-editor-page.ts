@@ -1,0 +1,83 @@
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal, untracked } from '@angular/core';
+import { Store } from '@ngrx/store';
+import { RecipeDesign, RecipeVisibility, UnitSystem } from '@shared/recipes';
+import { PredictionPanel } from '../prediction-panel/prediction-panel';
+import { RecipeActions } from '../recipe-actions/recipe-actions';
+import { RecipeForm } from '../recipe-form/recipe-form';
+import { ScalePanel } from '../scale-panel/scale-panel';
+import { RecipeEditorPageActions } from '../state/recipe-editor-page.actions';
+import { selectEditorPrediction, selectEditorStyle, selectEditorStyleComparison, selectRecipeEditorViewModel } from '../state/recipes.selectors';
+
+/** New and existing recipes: the form, its live predictions and what can be done with the recipe. */
+@Component({
+  selector: 'cw-recipe-editor-page',
+  imports: [RecipeForm, PredictionPanel, RecipeActions, ScalePanel],
+  templateUrl: './recipe-editor-page.html',
+  styleUrl: './recipe-editor-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class RecipeEditorPage {
+  private readonly store = inject(Store);
+  /** From the route; absent for a new recipe. */
+  readonly recipeId = input<string>();
+
+  protected readonly vm = this.store.selectSignal(selectRecipeEditorViewModel);
+  protected readonly prediction = this.store.selectSignal(selectEditorPrediction);
+  protected readonly comparisons = this.store.selectSignal(selectEditorStyleComparison);
+  protected readonly style = this.store.selectSignal(selectEditorStyle);
+  protected readonly scaling = signal(false);
+  protected readonly heading = computed(() => {
+    const recipe = this.vm().recipe;
+    return recipe ? recipe.name : this.recipeId() ? 'Recipe' : 'New recipe';
+  });
+
+  constructor() {
+    effect(() => {
+      const id = this.recipeId();
+      untracked(() => {
+        this.scaling.set(false);
+        this.store.dispatch(id ? RecipeEditorPageActions.existingOpened({ recipeId: Number(id) }) : RecipeEditorPageActions.newOpened());
+      });
+    });
+  }
+
+  protected changeDesign(design: RecipeDesign | null): void {
+    this.store.dispatch(RecipeEditorPageActions.designChanged({ design }));
+  }
+
+  protected save(design: RecipeDesign): void {
+    const recipe = this.vm().recipe;
+    this.store.dispatch(
+      RecipeEditorPageActions.saveSubmitted({ recipeId: recipe?.id ?? null, design, visibility: recipe?.visibility ?? 'private' }),
+    );
+  }
+
+  protected applyScale(design: RecipeDesign): void {
+    this.scaling.set(false);
+    this.store.dispatch(RecipeEditorPageActions.designScaled({ design }));
+  }
+
+  protected clone(): void {
+    const recipe = this.vm().recipe;
+    if (recipe) this.store.dispatch(RecipeEditorPageActions.cloneRequested({ recipeId: recipe.id, name: `${recipe.name} (copy)` }));
+  }
+
+  protected changeVisibility(visibility: RecipeVisibility): void {
+    const recipe = this.vm().recipe;
+    if (recipe) this.store.dispatch(RecipeEditorPageActions.visibilityChanged({ recipeId: recipe.id, visibility }));
+  }
+
+  protected toggleArchive(archived: boolean): void {
+    const recipe = this.vm().recipe;
+    if (recipe) this.store.dispatch(RecipeEditorPageActions.archiveToggled({ recipeId: recipe.id, archived }));
+  }
+
+  protected exportRecipe(): void {
+    const recipe = this.vm().recipe;
+    if (recipe) this.store.dispatch(RecipeEditorPageActions.exportRequested({ recipeId: recipe.id }));
+  }
+
+  protected changeUnits(unitSystem: UnitSystem): void {
+    this.store.dispatch(RecipeEditorPageActions.unitSystemChanged({ unitSystem }));
+  }
+}

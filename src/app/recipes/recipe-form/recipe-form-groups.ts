@@ -1,0 +1,50 @@
+import { FormControl, FormGroup, NonNullableFormBuilder, Validators } from '@angular/forms';
+import { HopUse, toDisplayUnits, UnitSystem } from '@shared/recipes';
+import { RecipeFormValue } from './recipe-form-model';
+
+/** Mash temperatures the form accepts, °C; converted for a US-unit person. */
+const MASH_MIN_C = 30;
+const MASH_MAX_C = 80;
+
+export type FermentableGroup = FormGroup<{ fermentableId: FormControl<number | null>; amount: FormControl<number | null> }>;
+export type HopGroup = FormGroup<{ hopId: FormControl<number | null>; amount: FormControl<number | null>; time: FormControl<number | null>; use: FormControl<HopUse> }>;
+export type MashStepGroup = FormGroup<{ name: FormControl<string>; temperature: FormControl<number | null>; minutes: FormControl<number | null> }>;
+export type OtherGroup = FormGroup<{ otherId: FormControl<number | null>; amount: FormControl<number | null>; unit: FormControl<string>; when: FormControl<string> }>;
+
+const positive = [Validators.required, Validators.min(0.001)];
+
+/** Builds the form's row groups with their validators. */
+export function recipeRowGroups(fb: NonNullableFormBuilder) {
+  return {
+    fermentable(row: RecipeFormValue['fermentables'][number] = { fermentableId: null, amount: null }): FermentableGroup {
+      return fb.group({
+        fermentableId: fb.control<number | null>(row.fermentableId, Validators.required),
+        amount: fb.control<number | null>(row.amount, [...positive, Validators.max(1000)]),
+      });
+    },
+    hop(row: RecipeFormValue['hops'][number] = { hopId: null, amount: null, time: 60, use: 'boil' }): HopGroup {
+      return fb.group({
+        hopId: fb.control<number | null>(row.hopId, Validators.required),
+        amount: fb.control<number | null>(row.amount, [...positive, Validators.max(10000)]),
+        time: fb.control<number | null>(row.time, [Validators.required, Validators.min(0), Validators.max(360)]),
+        use: fb.control<HopUse>(row.use, Validators.required),
+      });
+    },
+    mashStep(row: RecipeFormValue['mashSteps'][number], system: UnitSystem): MashStepGroup {
+      const [min, max] = [MASH_MIN_C, MASH_MAX_C].map((celsius) => toDisplayUnits('temperature', celsius, system));
+      return fb.group({
+        name: fb.control(row.name, [Validators.required, Validators.maxLength(80)]),
+        temperature: fb.control<number | null>(row.temperature, [Validators.required, Validators.min(min), Validators.max(max)]),
+        minutes: fb.control<number | null>(row.minutes, [Validators.required, Validators.min(1), Validators.max(600)]),
+      });
+    },
+    other(row: RecipeFormValue['others'][number] = { otherId: null, amount: null, unit: 'g', when: '' }): OtherGroup {
+      return fb.group({
+        otherId: fb.control<number | null>(row.otherId, Validators.required),
+        amount: fb.control<number | null>(row.amount, [...positive, Validators.max(100000)]),
+        unit: fb.control(row.unit, [Validators.required, Validators.maxLength(20)]),
+        when: fb.control(row.when, Validators.maxLength(80)),
+      });
+    },
+  };
+}

@@ -1,0 +1,126 @@
+import { ChangeDetectionStrategy, Component, DestroyRef, effect, inject, input, output, untracked } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { FormArray, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
+import { MatOption, MatSelect } from '@angular/material/select';
+import { IngredientCatalogue, RecipeDesign, StyleTarget, unitLabel, UnitSystem } from '@shared/recipes';
+import { FermentableRows } from '../fermentable-rows/fermentable-rows';
+import { HopRows } from '../hop-rows/hop-rows';
+import { MashStepRows } from '../mash-step-rows/mash-step-rows';
+import { OtherRows } from '../other-rows/other-rows';
+import { recipeRowGroups } from './recipe-form-groups';
+import { designToFormValue, formValueToDesign, RecipeFormValue } from './recipe-form-model';
+
+/** The recipe as a reactive form in the person's units; emits the design (SI) as it is typed. */
+@Component({
+  selector: 'cw-recipe-form',
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatButton,
+    FermentableRows, HopRows, MashStepRows, OtherRows],
+  templateUrl: './recipe-form.html',
+  styleUrl: './recipe-form.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class RecipeForm {
+  private readonly fb = inject(NonNullableFormBuilder);
+  readonly design = input.required<RecipeDesign>();
+  /** Goes up whenever `design` must replace what is typed. */
+  readonly revision = input(0);
+  readonly unitSystem = input<UnitSystem>('metric');
+  readonly catalogue = input.required<IngredientCatalogue>();
+  readonly styles = input<readonly StyleTarget[]>([]);
+  readonly editable = input(true);
+  readonly saving = input(false);
+  readonly designChanged = output<RecipeDesign | null>();
+  readonly saveSubmitted = output<RecipeDesign>();
+
+  protected readonly rows = recipeRowGroups(this.fb);
+  protected readonly form = this.fb.group({
+    name: ['', [Validators.required, Validators.maxLength(120)]],
+    styleId: this.fb.control<number | null>(null),
+    batchVolume: this.fb.control<number | null>(null, [Validators.required, Validators.min(0.5), Validators.max(10000)]),
+    mashEfficiencyPercent: this.fb.control<number | null>(null, [Validators.required, Validators.min(20), Validators.max(100)]),
+    boilMinutes: this.fb.control<number | null>(null, [Validators.required, Validators.min(0), Validators.max(360)]),
+    yeastId: this.fb.control<number | null>(null),
+    notes: ['', Validators.maxLength(4000)],
+    fermentables: this.fb.array([this.rows.fermentable()]),
+    hops: this.fb.array([this.rows.hop()]),
+    mashSteps: this.fb.array([this.rows.mashStep({ name: '', temperature: null, minutes: null }, 'metric')]),
+    others: this.fb.array([this.rows.other()]),
+  });
+  private shownSystem: UnitSystem = 'metric';
+
+  protected readonly label = (quantity: Parameters<typeof unitLabel>[0]) => unitLabel(quantity, this.unitSystem());
+
+  constructor() {
+    // The design is read untracked: it follows every keystroke, and only a new revision replaces what is typed.
+    effect(() => {
+      this.revision();
+      const system = this.unitSystem();
+      const editable = this.editable();
+      untracked(() => {
+        this.load(this.design(), system, editable);
+        this.designChanged.emit(this.liveDesign());
+      });
+    });
+    this.form.valueChanges.pipe(takeUntilDestroyed(inject(DestroyRef))).subscribe(() => this.designChanged.emit(this.liveDesign()));
+  }
+
+  protected addFermentable(): void {
+    this.form.controls.fermentables.push(this.rows.fermentable());
+  }
+
+  protected addHop(): void {
+    this.form.controls.hops.push(this.rows.hop());
+  }
+
+  protected addMashStep(): void {
+    this.form.controls.mashSteps.push(this.rows.mashStep({ name: '', temperature: null, minutes: null }, this.unitSystem()));
+  }
+
+  protected addOther(): void {
+    this.form.controls.others.push(this.rows.other());
+  }
+
+  protected submit(): void {
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    this.saveSubmitted.emit(formValueToDesign(this.form.getRawValue(), this.unitSystem()));
+  }
+
+  /** Puts a design into the form; when only the unit system changed, what is typed is kept and converted. */
+  private load(design: RecipeDesign, system: UnitSystem, editable: boolean): void {
+    const typed = this.form.dirty && system !== this.shownSystem && this.form.valid;
+    const source = typed ? formValueToDesign(this.form.getRawValue(), this.shownSystem) : design;
+    this.shownSystem = system;
+    const value = designToFormValue(source, system);
+    this.form.setControl('fermentables', this.fb.array(value.fermentables.map((row) => this.rows.fermentable(row))), { emitEvent: false });
+    this.form.setControl('hops', this.fb.array(value.hops.map((row) => this.rows.hop(row))), { emitEvent: false });
+    this.form.setControl('mashSteps', this.fb.array(value.mashSteps.map((row) => this.rows.mashStep(row, system))), { emitEvent: false });
+    this.form.setControl('others', this.fb.array(value.others.map((row) => this.rows.other(row))), { emitEvent: false });
+    this.form.patchValue(value, { emitEvent: false });
+    if (editable) this.form.enable({ emitEvent: false });
+    else this.form.disable({ emitEvent: false });
+    if (!typed) this.form.markAsPristine();
+  }
+
+  /** The design as typed so far: half-filled rows are left out, so the predictions follow every keystroke. */
+  private liveDesign(): RecipeDesign | null {
+    const { controls } = this.form;
+    if (controls.batchVolume.invalid || controls.mashEfficiencyPercent.invalid || controls.boilMinutes.invalid) return null;
+    const value = this.form.getRawValue();
+    const validRows = <T>(array: FormArray, rows: T[]) => rows.filter((_row, index) => array.at(index).valid);
+    const live: RecipeFormValue = {
+      ...value,
+      name: value.name || 'Untitled',
+      fermentables: validRows(controls.fermentables, value.fermentables),
+      hops: validRows(controls.hops, value.hops),
+      mashSteps: validRows(controls.mashSteps, value.mashSteps),
+      others: validRows(controls.others, value.others),
+    };
+    return formValueToDesign(live, this.unitSystem());
+  }
+}

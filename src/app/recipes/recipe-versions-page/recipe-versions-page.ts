@@ -1,0 +1,51 @@
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, effect, inject, input, signal, untracked } from '@angular/core';
+import { FormsModule } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatFormField, MatLabel } from '@angular/material/form-field';
+import { MatOption, MatSelect } from '@angular/material/select';
+import { RouterLink } from '@angular/router';
+import { Store } from '@ngrx/store';
+import { VersionDiff } from '../version-diff/version-diff';
+import { RecipeVersionsPageActions } from '../state/recipe-versions-page.actions';
+import { selectRecipeVersionsViewModel } from '../state/recipes.selectors';
+
+/** A recipe's versions: pick two and see them side by side. */
+@Component({
+  selector: 'cw-recipe-versions-page',
+  imports: [VersionDiff, RouterLink, FormsModule, DatePipe, MatButton, MatFormField, MatLabel, MatSelect, MatOption],
+  templateUrl: './recipe-versions-page.html',
+  styleUrl: './recipe-versions-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class RecipeVersionsPage {
+  private readonly store = inject(Store);
+  readonly recipeId = input.required<string>();
+
+  protected readonly vm = this.store.selectSignal(selectRecipeVersionsViewModel);
+  protected readonly left = signal<number | null>(null);
+  protected readonly right = signal<number | null>(null);
+
+  constructor() {
+    effect(() => {
+      const recipeId = Number(this.recipeId());
+      untracked(() => this.store.dispatch(RecipeVersionsPageActions.opened({ recipeId })));
+    });
+    // Until the person picks, the last two versions are proposed.
+    effect(() => {
+      const versions = this.vm().versions.map((each) => each.version).sort((a, b) => a - b);
+      untracked(() => {
+        this.right.set(versions.at(-1) ?? null);
+        this.left.set(versions.at(-2) ?? versions.at(-1) ?? null);
+      });
+    });
+  }
+
+  protected compare(): void {
+    const left = this.left();
+    const right = this.right();
+    if (left !== null && right !== null) {
+      this.store.dispatch(RecipeVersionsPageActions.versionsPicked({ recipeId: Number(this.recipeId()), left, right }));
+    }
+  }
+}

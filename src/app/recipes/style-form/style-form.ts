@@ -1,0 +1,74 @@
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, output, untracked } from '@angular/core';
+import { AbstractControl, NonNullableFormBuilder, ReactiveFormsModule, ValidationErrors, Validators } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
+import { STYLE_TARGET_KEYS, StyleTarget, StyleTargetInput, StyleTargetKey } from '@shared/recipes';
+
+const BOUNDS: Record<StyleTargetKey, { label: string; min: number; max: number; step: number }> = {
+  og: { label: 'OG', min: 1, max: 1.2, step: 0.001 },
+  fg: { label: 'FG', min: 0.98, max: 1.2, step: 0.001 },
+  abv: { label: 'ABV (% vol)', min: 0, max: 25, step: 0.1 },
+  ibu: { label: 'IBU', min: 0, max: 150, step: 1 },
+  colourSrm: { label: 'Colour (SRM)', min: 0, max: 80, step: 0.5 },
+};
+
+function orderedRange(group: AbstractControl): ValidationErrors | null {
+  const { min, max } = group.value as { min: number | null; max: number | null };
+  return min !== null && max !== null && min > max ? { order: true } : null;
+}
+
+/** Adds or changes a style of the co-op's list: a name and five ranges. */
+@Component({
+  selector: 'cw-style-form',
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatInput, MatButton],
+  templateUrl: './style-form.html',
+  styleUrl: '../catalogue-entry-form/catalogue-entry-form.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class StyleForm {
+  private readonly fb = inject(NonNullableFormBuilder);
+  readonly style = input<StyleTarget | null>(null);
+  readonly saving = input(false);
+  readonly savedCount = input(0);
+  readonly submitted = output<StyleTargetInput>();
+  readonly cancelled = output<void>();
+
+  protected readonly targets = STYLE_TARGET_KEYS.map((key) => ({ key, ...BOUNDS[key] }));
+  protected readonly form = this.fb.group({
+    name: this.fb.control('', [Validators.required, Validators.maxLength(100)]),
+    og: this.range('og'),
+    fg: this.range('fg'),
+    abv: this.range('abv'),
+    ibu: this.range('ibu'),
+    colourSrm: this.range('colourSrm'),
+  });
+  protected readonly title = computed(() => (this.style() ? `Change ${this.style()!.name}` : 'Add a style'));
+
+  constructor() {
+    effect(() => {
+      this.savedCount();
+      const style = this.style();
+      untracked(() => {
+        this.form.reset();
+        if (style) this.form.patchValue(style);
+      });
+    });
+  }
+
+  protected submit(): void {
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    const value = this.form.getRawValue();
+    const ranges = Object.fromEntries(STYLE_TARGET_KEYS.map((key) => [key, { min: value[key].min ?? 0, max: value[key].max ?? 0 }]));
+    this.submitted.emit({ name: value.name.trim(), ...ranges } as StyleTargetInput);
+  }
+
+  private range(key: StyleTargetKey) {
+    const { min, max } = BOUNDS[key];
+    const limits = [Validators.required, Validators.min(min), Validators.max(max)];
+    return this.fb.group({ min: this.fb.control<number | null>(null, limits), max: this.fb.control<number | null>(null, limits) }, { validators: orderedRange });
+  }
+}
