@@ -19,6 +19,7 @@ export const routes: Routes = [
     children: [
       { path: '', pathMatch: 'full', redirectTo: 'today' },
       { path: 'today', title: 'Today · Commonwort', loadChildren: () => import('./today/today.routes').then((m) => m.todayRoutes) },
+      { path: 'recipes', title: 'Recipes · Commonwort', loadChildren: () => import('./recipes/recipes.routes').then((m) => m.recipesRoutes) },
       {
         path: 'members',
         title: 'Members · Commonwort',

@@ -16,7 +16,7 @@ export interface NavItem {
 /** The areas of the app, in the product's order. */
 export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Today', path: '/today', icon: 'today', available: true, roles: null, summary: 'Your day at the co-op.' },
-  { label: 'Recipes', path: '/recipes', icon: 'menu_book', available: false, roles: null, summary: 'Recipes with live predictions.' },
+  { label: 'Recipes', path: '/recipes', icon: 'menu_book', available: true, roles: null, summary: 'Recipes with live predictions.' },
   { label: 'Batches', path: '/batches', icon: 'science', available: false, roles: null, summary: 'Batches from recipe to packaging.' },
   { label: 'Gravity log', path: '/gravity-log', icon: 'water_drop', available: false, roles: null, summary: 'Gravity readings of a batch.' },
   { label: 'Strength check', path: '/strength-check', icon: 'percent', available: false, roles: null, summary: 'Estimated and density-based ABV.' },

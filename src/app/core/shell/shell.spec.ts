@@ -38,12 +38,12 @@ describe('Shell', () => {
     expect(element.querySelectorAll('main')).toHaveLength(1);
   });
 
-  it('lists only Today in the navigation of a member', async () => {
-    expect(navLabels(await render(['member']))).toEqual(['Today']);
+  it('lists Today and Recipes in the navigation of a member', async () => {
+    expect(navLabels(await render(['member']))).toEqual(['Today', 'Recipes']);
   });
 
   it('adds Members to the navigation of an admin', async () => {
-    expect(navLabels(await render(['member', 'admin']))).toEqual(['Today', 'Members']);
+    expect(navLabels(await render(['member', 'admin']))).toEqual(['Today', 'Recipes', 'Members']);
   });
 
   it('dispatches Sign Out Clicked from the account menu', async () => {

@@ -30,16 +30,17 @@ describe('TodayPage', () => {
     expect([...element.querySelectorAll('cw-role-badge')].map((badge) => badge.textContent?.trim())).toEqual(['member', 'brewer']);
   });
 
-  it('shows no area cards to a member, since no other area is open to them yet', async () => {
+  it('shows a member only the Recipes card, the one other area open to them so far', async () => {
     const element = await render(['member']);
 
-    expect(element.querySelectorAll('cw-area-card')).toHaveLength(0);
+    const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes']);
   });
 
   it('shows a Members card linking to /members for an admin', async () => {
     const element = await render(['member', 'admin']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/members']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/members']);
   });
 });
