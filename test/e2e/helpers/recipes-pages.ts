@@ -1,0 +1,72 @@
+import { Locator, Page } from 'playwright-core';
+
+/** Picks an option of a Material select by the option's visible text. */
+async function choose(select: Locator, optionText: string): Promise<void> {
+  await select.click();
+  await select.page().getByRole('option', { name: optionText }).click();
+}
+
+/** The recipe editor: the form, the prediction panel and the recipe's actions. */
+export const recipeEditorPage = {
+  async openNew(page: Page): Promise<void> {
+    await page.goto('/recipes');
+    await page.getByRole('heading', { level: 1, name: 'Recipes' }).waitFor();
+    await page.getByRole('link', { name: 'New recipe' }).click();
+    await page.getByRole('heading', { level: 1, name: 'New recipe' }).waitFor();
+  },
+
+  async name(page: Page, name: string): Promise<void> {
+    await page.getByLabel('Recipe name').fill(name);
+  },
+
+  async addFermentable(page: Page, entryName: string, amount: string): Promise<void> {
+    await page.getByRole('button', { name: 'Add fermentable' }).click();
+    const row = page.getByRole('group', { name: /^Fermentable \d+$/ }).last();
+    await choose(row.getByRole('combobox', { name: 'Fermentable' }), entryName);
+    await row.getByLabel('Amount').fill(amount);
+  },
+
+  async addHop(page: Page, entryName: string, grams: string, minutes: string): Promise<void> {
+    await page.getByRole('button', { name: 'Add hop' }).click();
+    const row = page.getByRole('group', { name: /^Hop addition \d+$/ }).last();
+    await choose(row.getByRole('combobox', { name: 'Hop' }), entryName);
+    await row.getByLabel('Amount').fill(grams);
+    await row.getByLabel('Time').fill(minutes);
+  },
+
+  async chooseYeast(page: Page, entryName: string): Promise<void> {
+    await choose(page.getByRole('combobox', { name: 'Yeast' }), entryName);
+  },
+
+  /** A predicted figure as shown in the panel. */
+  async shown(page: Page, figure: 'og' | 'fg' | 'ibu' | 'abv-density' | 'colour'): Promise<string> {
+    return ((await page.getByTestId(`prediction-${figure}`).textContent()) ?? '').trim();
+  },
+
+  /** Saves and waits for the saved version's number in the page. */
+  async save(page: Page, expectedVersion: number): Promise<void> {
+    await page.getByRole('button', { name: 'Save', exact: true }).click();
+    await page.getByText(`Version ${expectedVersion} ·`).waitFor();
+  },
+
+  async scale(page: Page, volume: string): Promise<void> {
+    await page.getByRole('button', { name: 'Scale…' }).click();
+    await page.getByLabel('New batch volume').fill(volume);
+    await page.getByRole('button', { name: 'Apply scaling' }).click();
+  },
+};
+
+/** The versions page: pick two versions and compare them side by side. */
+export const recipeVersionsPage = {
+  async open(page: Page): Promise<void> {
+    await page.getByRole('link', { name: 'Versions' }).click();
+    await page.getByRole('heading', { level: 1, name: /^Versions of / }).waitFor();
+  },
+
+  async compare(page: Page): Promise<Locator> {
+    await page.getByRole('button', { name: 'Compare' }).click();
+    const table = page.getByRole('region', { name: 'Version comparison' });
+    await table.waitFor();
+    return table;
+  },
+};
