@@ -1,6 +1,7 @@
 // Throughput of the science core, each figure also as a ratio to the bare OIML density polynomial
 // measured in the same run, so results compare across machines.
-import { ethanolWaterDensity, evaluateOimlPolynomial, massFractionFromDensity, strengthBreakdown } from '@shared/science';
+import { ethanolWaterDensity, massFractionFromDensity, strengthBreakdown } from '@shared/science';
+import { evaluateOimlPolynomial } from '@shared/science/ethanol-water/oiml-density';
 
 const SAMPLES = 4096;
 const RUN_MS = 600;

@@ -30,5 +30,6 @@ export function volumesAtGaugePressure(gaugeBar: number, temperature: Celsius): 
 
 /** Converts bar to psi. */
 export function barToPsi(bar: number): number {
+  requireInRange('bar', bar, -BAR_PER_ATM, 1e4, 'bar');
   return bar * 14.503773773;
 }

@@ -8,6 +8,7 @@ export const CARBONATION_ENTRIES: CatalogueEntry[] = [
   e('co2VolumesPerAtm', "CO2 volumes dissolved per atm (Henry's law)", [num('temperature', '°C')], 'vol/atm', c.co2VolumesPerAtm),
   e('gaugePressureForVolumes', 'gauge pressure holding a CO2 content', [num('volumes', 'vol'), num('temperature', '°C')], 'bar', c.gaugePressureForVolumes),
   e('volumesAtGaugePressure', 'CO2 content held by a gauge pressure', [num('gaugeBar', 'bar'), num('temperature', '°C')], 'vol', c.volumesAtGaugePressure),
+  e('barToPsi', 'bar to psi', [num('bar', 'bar')], 'psi', c.barToPsi),
   e('residualCo2', 'CO2 left after fermentation', [num('highestTemperature', '°C')], 'vol', c.residualCo2),
   {
     name: 'primingSugar', summary: 'priming sugar for a target CO2 content, with the implied warm-bottle pressure',
@@ -35,6 +36,11 @@ export const CARBONATION_ENTRIES: CatalogueEntry[] = [
     name: 'toleranceVerdict', summary: 'whether a declared figure is within tolerance of a measured one with its expanded uncertainty',
     parameters: [num('declared', '% vol'), num('measured', '% vol'), num('expandedUncertainty', '% vol'), num('tolerance', '% vol')], returns: 'within | outside | undecided',
     call: (a) => u.toleranceVerdict(arg(a, 'declared'), { value: arg(a, 'measured'), standardUncertainty: arg(a, 'expandedUncertainty') / 2, expandedUncertainty: arg(a, 'expandedUncertainty') }, arg(a, 'tolerance')),
+  },
+  {
+    name: 'redlichKisterExcessVolume', summary: 'excess molar volume of a Redlich–Kister expansion (Legendre form)',
+    parameters: [num('moleFraction', 'mole fraction'), json('coefficients', '[A0, A1, …] cm³/mol')], returns: 'cm³/mol',
+    call: (a) => audit.redlichKisterExcessVolume(arg(a, 'moleFraction'), jsonArg(a, 'coefficients')),
   },
   {
     name: 'auditDensityTable', summary: 'audit a (% mass, density) table for rows that stand out',

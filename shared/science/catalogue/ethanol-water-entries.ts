@@ -8,6 +8,8 @@ const T = num('temperature', '°C');
 export const ETHANOL_WATER_ENTRIES: CatalogueEntry[] = [
   e('ethanolWaterDensity', 'density of an ethanol–water mixture (OIML R 22)', [P, T], 'kg/m³', ew.ethanolWaterDensity),
   e('pureEthanolDensity', 'density of pure ethanol (OIML R 22)', [T], 'kg/m³', ew.pureEthanolDensity),
+  e('oimlWaterDensity', 'density of pure water by the OIML R 22 equation', [T], 'kg/m³', ew.oimlWaterDensity),
+  e('massFractionFromEthanolConcentration', 'mass fraction from ethanol g/L at t', [num('gramsPerLitre', 'g/L'), T], 'mass fraction', ew.massFractionFromEthanolConcentration),
   e('massFractionFromDensity', 'mass fraction from density and temperature', [num('density', 'kg/m³'), T], 'mass fraction', ew.massFractionFromDensity),
   e('percentVolumeFromMassFraction', '% vol at t from mass fraction', [P, T], '% vol', ew.percentVolumeFromMassFraction),
   e('massFractionFromPercentVolume', 'mass fraction from % vol at t', [num('percentVolume', '% vol'), T], 'mass fraction', ew.massFractionFromPercentVolume),
@@ -20,6 +22,9 @@ export const ETHANOL_WATER_ENTRIES: CatalogueEntry[] = [
   e('restatePercentVolume', '% vol at one temperature restated at another',
     [num('percentVolume', '% vol'), num('fromTemperature', '°C'), num('toTemperature', '°C')], '% vol', ew.restatePercentVolume),
   e('excessMolarVolume', 'excess molar volume (OIML R 22)', [P, T], 'cm³/mol', ew.excessMolarVolume),
+  e('excessMolarVolumeFromDensities', 'excess molar volume from a mixture density and the pure densities',
+    [num('moleFraction', 'mole fraction'), num('mixtureDensity', 'kg/m³'), num('ethanolDensity', 'kg/m³'), num('waterDensity', 'kg/m³')], 'cm³/mol', ew.excessMolarVolumeFromDensities),
+  e('ethanolVolumeInStock', 'volume of pure ethanol at t in a stock', [num('volume', 'L'), num('percentVolume', '% vol'), opt('temperature', '°C')], 'L', ew.ethanolVolumeInStock),
   e('mixContraction', 'volume and contraction after mixing ethanol and water',
     [num('ethanolVolume', 'L'), num('waterVolume', 'L'), T], '{massFraction, percentVolume, finalVolume L, contractionVolume L, contractionPercent}', ew.mixContraction),
   e('dilutionWithWater', 'water to add to reach a target % vol, and the final volume',

@@ -9,6 +9,7 @@ export const GRAVITY_ENTRIES: CatalogueEntry[] = [
   e('sgFromPlato', 'SG 20/20 °C from °Plato', [num('plato', '°P')], 'SG 20/20', g.sgFromPlato),
   e('brixFromSg', '°Brix from SG 20/20 °C', [num('sg', 'SG 20/20')], '°Bx', g.brixFromSg),
   e('sgFromBrix', 'SG 20/20 °C from °Brix', [num('brix', '°Bx')], 'SG 20/20', g.sgFromBrix),
+  e('restateSpecificGravity', 'SG t1/t1 restated as SG t2/t2', [num('sg', 'SG'), num('from', '°C'), num('to', '°C')], 'SG', g.restateSpecificGravity),
   e('sg6060FromSg2020', 'SG 60/60 °F from SG 20/20 °C', [num('sg', 'SG 20/20')], 'SG 60/60', g.sg6060FromSg2020),
   e('sg2020FromSg6060', 'SG 20/20 °C from SG 60/60 °F', [num('sg', 'SG 60/60')], 'SG 20/20', g.sg2020FromSg6060),
   e('hydrometerTemperatureCorrection', 'hydrometer reading corrected to its calibration temperature',
@@ -27,4 +28,5 @@ export const GRAVITY_ENTRIES: CatalogueEntry[] = [
   e('poundsToKilograms', 'lb to kg', [num('pounds', 'lb')], 'kg', u.poundsToKilograms),
   e('gramsToOunces', 'g to oz', [num('grams', 'g')], 'oz', u.gramsToOunces),
   e('ouncesToGrams', 'oz to g', [num('ounces', 'oz')], 'g', u.ouncesToGrams),
+  e('kgPerCubicMetreToGramsPerCubicCentimetre', 'kg/m³ to g/cm³', [num('density', 'kg/m³')], 'g/cm³', u.kgPerCubicMetreToGramsPerCubicCentimetre),
 ];

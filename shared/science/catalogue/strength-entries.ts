@@ -15,4 +15,7 @@ export const STRENGTH_ENTRIES: CatalogueEntry[] = [
   e('densityBasedAbv', 'density-based % vol at 20 °C', [OG, FG], '% vol', s.densityBasedAbv),
   e('strengthBreakdown', 'density-based % vol at 20 °C with every intermediate', [OG, FG],
     '{originalExtract °P, apparentExtract °P, realExtract °P, alcoholByMass % m/m, beerDensity20 kg/m³, percentVolume20 % vol, ...}', s.strengthBreakdown),
+  e('strengthFromBeerDensity', 'density-based % vol from a beer density read at t, restated to 20 °C',
+    [OG, FG, num('beerDensity', 'kg/m³'), num('temperature', '°C')],
+    '{originalExtract °P, apparentExtract °P, realExtract °P, alcoholByMass % m/m, ethanolDensity kg/m³, percentVolumeAtT, percentVolume20 % vol}', s.strengthFromBeerDensity),
 ];

@@ -29,15 +29,19 @@ export function blendToTarget(
   requireInRange('targetPercentVolume', targetPercentVolume, 0, 100, '% vol');
   const low = Math.min(percentVolume, addPercentVolume);
   const high = Math.max(percentVolume, addPercentVolume);
-  if (targetPercentVolume < low || targetPercentVolume > high || percentVolume === addPercentVolume) {
+  if (targetPercentVolume < low || targetPercentVolume > high || targetPercentVolume === addPercentVolume) {
     throw new ScienceRangeError('targetPercentVolume', targetPercentVolume, low, high, '% vol', 'inconsistent',
-      `targetPercentVolume = ${targetPercentVolume} % vol must lie between the stock (${percentVolume}) and the addition (${addPercentVolume}) and differ from the stock`);
+      `targetPercentVolume = ${targetPercentVolume} % vol must lie between the stock (${percentVolume}) and the addition (${addPercentVolume}), short of the addition`);
   }
   const stock = massAndEthanol({ volume, percentVolume }, temperature);
   const perLitre = massAndEthanol({ volume: 1, percentVolume: addPercentVolume }, temperature);
   const target = massFractionFromPercentVolume(targetPercentVolume, temperature);
   // target·(m1 + V2·rho2) = e1 + V2·e2  →  V2 = (target·m1 − e1) / (e2 − target·rho2)
   const addedVolume = (target * stock.mass - stock.ethanol) / (perLitre.ethanol - target * perLitre.mass);
+  if (!Number.isFinite(addedVolume) || addedVolume < 0 || addedVolume > 1e6 * volume) {
+    throw new ScienceRangeError('targetPercentVolume', targetPercentVolume, low, high, '% vol', 'inconsistent',
+      `targetPercentVolume = ${targetPercentVolume} % vol is so close to the addition (${addPercentVolume}) that it needs over a million times the stock`);
+  }
   const finalVolume = (stock.mass + addedVolume * perLitre.mass) / ethanolWaterDensity(target, temperature);
   return { addedVolume, finalVolume, finalPercentVolume: targetPercentVolume, contractionVolume: volume + addedVolume - finalVolume };
 }

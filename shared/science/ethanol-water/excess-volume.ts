@@ -1,5 +1,5 @@
 import type { Celsius, MassFraction } from '../units/unit-types';
-import { requirePositive } from '../units/range-guard';
+import { requireInRange, requirePositive } from '../units/range-guard';
 import { moleFractionFromMassFraction } from './concentration';
 import { ETHANOL_MOLAR_MASS, WATER_MOLAR_MASS } from './molar-masses';
 import { ethanolWaterDensity, pureEthanolDensity } from './oiml-density';
@@ -8,6 +8,11 @@ import { ethanolWaterDensity, pureEthanolDensity } from './oiml-density';
 export function excessMolarVolumeFromDensities(
   moleFraction: number, mixtureDensity: number, ethanolDensity: number, waterDensity: number,
 ): number {
+  requireInRange('moleFraction', moleFraction, 0, 1, '');
+  // A mistyped table row may be far off; accept any density that cannot overflow the arithmetic.
+  requireInRange('mixtureDensity', mixtureDensity, 1e-3, 1e6, 'kg/m³');
+  requireInRange('ethanolDensity', ethanolDensity, 100, 5000, 'kg/m³');
+  requireInRange('waterDensity', waterDensity, 100, 5000, 'kg/m³');
   // M [g/mol] / rho [kg/m³] is in L/mol; ×1000 gives cm³/mol.
   const meanMolarMass = moleFraction * ETHANOL_MOLAR_MASS + (1 - moleFraction) * WATER_MOLAR_MASS;
   const ideal = moleFraction * ETHANOL_MOLAR_MASS / ethanolDensity + (1 - moleFraction) * WATER_MOLAR_MASS / waterDensity;

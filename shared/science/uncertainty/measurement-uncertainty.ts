@@ -18,7 +18,8 @@ export function propagate(f: (inputs: number[]) => number, inputs: number[], unc
   inputs.forEach((x, i) => {
     const u = uncertainties[i];
     if (u === 0) return;
-    const h = u * 1e-3;
+    // A step far below u keeps the estimate local; the floor keeps it above rounding of x itself.
+    const h = Math.max(u * 1e-3, Math.abs(x) * 1e-9, 1e-12);
     const up = inputs.slice();
     const down = inputs.slice();
     up[i] = x + h;
@@ -36,6 +37,9 @@ export type ToleranceVerdict = 'within' | 'outside' | 'undecided';
 /** Whether a declared value is within ±tolerance of a measured one, given its expanded uncertainty. */
 export function toleranceVerdict(declared: number, measured: UncertainValue, tolerance: number): ToleranceVerdict {
   requireInRange('tolerance', tolerance, 0, 100, '');
+  requireInRange('declared', declared, -1e6, 1e6, '');
+  requireInRange('measured', measured.value, -1e6, 1e6, '');
+  requireInRange('expandedUncertainty', measured.expandedUncertainty, 0, 1e6, '');
   const gap = Math.abs(declared - measured.value);
   if (gap + measured.expandedUncertainty <= tolerance) return 'within';
   if (gap - measured.expandedUncertainty > tolerance) return 'outside';

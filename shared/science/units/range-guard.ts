@@ -10,10 +10,16 @@ export function requireInRange(parameter: string, value: number, min: number, ma
   return value;
 }
 
-/** Returns the value if it is finite and strictly above zero (a volume, a mass), else throws. */
-export function requirePositive(parameter: string, value: number, unit = '', max = Number.MAX_VALUE): number {
+// Smallest amount accepted where zero is meaningless: far below any real volume or mass, far above
+// the sub-normal numbers whose products underflow to 0/0.
+const SMALLEST_AMOUNT = 1e-9;
+
+/** Returns the value if it is a finite amount above zero (a volume, a mass), else throws. */
+export function requirePositive(parameter: string, value: number, unit = '', max = 1e12): number {
   requireInRange(parameter, value, 0, max, unit);
-  if (value === 0) throw new ScienceRangeError(parameter, value, 0, max, unit, 'below-range', `${parameter} = 0${unit ? ' ' + unit : ''} must be above 0`);
+  if (value < SMALLEST_AMOUNT) {
+    throw new ScienceRangeError(parameter, value, SMALLEST_AMOUNT, max, unit, 'below-range', `${parameter} = ${value}${unit ? ' ' + unit : ''} must be above 0`);
+  }
   return value;
 }
 
