@@ -11,6 +11,11 @@ describe('% vol and % mass (OIML R 22)', () => {
     expect(Math.abs(100 * massFractionFromPercentVolume(vol, 20) - mass)).toBeLessThan(0.02);
   });
 
+  // US gauging tables (proof at 60 °F vs % by weight), from memory: 100 proof = 50 % vol at 60 °F = 42.49 % by weight.
+  it('gives 42.49 % mass for 50 % vol at 60 °F within 0.02', () => {
+    expect(Math.abs(100 * massFractionFromPercentVolume(50, (60 - 32) / 1.8) - 42.49)).toBeLessThan(0.02);
+  });
+
   // Well-known table value: 40 % vol at 20 °C has a density near 948 kg/m³ (from memory).
   it('puts 40 % vol at about 948 kg/m³ at 20 °C', () => {
     expect(Math.abs(ethanolWaterDensity(massFractionFromPercentVolume(40, 20), 20) - 948)).toBeLessThan(0.2);
