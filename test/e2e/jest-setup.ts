@@ -1,0 +1,2 @@
+// A browser journey under a loaded two-core machine takes seconds, not milliseconds.
+jest.setTimeout(60_000);
