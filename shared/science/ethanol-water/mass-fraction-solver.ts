@@ -1,11 +1,13 @@
 import { requireInRange } from '../units/range-guard';
 import type { Celsius, KgPerCubicMetre, MassFraction } from '../units/unit-types';
 import { evaluateOimlPolynomial, oimlCoefficientsInP, requireOimlRange } from './oiml-density';
+import { guessMassFraction } from './density-guide';
 
 /** Mass-fraction tolerance the inverse solvers stop at. */
 export const MASS_FRACTION_TOLERANCE = 1e-10;
 
 const coefficients = new Float64Array(12);
+const NEWTON_LAST_STEP = 1e-6;
 
 // Rounding makes the polynomial wobble by ~1e-12 kg/m³ at the ends; a reading that far past an
 // end is that end, not an error.
@@ -42,45 +44,24 @@ function solveInP(target: number, weightByP: boolean, guess: (share: number) => 
     if ((f > 0) === (fLo > 0)) { lo = p; fLo = f; } else { hi = p; fHi = f; }
     let next = p - f / slope;
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-    if (Math.abs(next - p) < MASS_FRACTION_TOLERANCE) return Math.min(1, Math.max(0, next));
+    // Newton's error after a step of size d is about (f''/2f')·d², with f''/2f' below ~10 here:
+    // a step under 1e-6 leaves an error under 1e-11, so no further evaluation is needed.
+    if (Math.abs(next - p) < NEWTON_LAST_STEP) return Math.min(1, Math.max(0, next));
     p = next;
   }
   return p;
 }
 
-// The curve p(share of the way from water to ethanol density) has nearly the same shape at every
-// temperature; sampled once at 20 °C it starts Newton within ~1e-3, so two or three steps finish.
-const GUIDE_NODES = 64;
-let guide: Float64Array | undefined;
-
-function buildGuide(): Float64Array {
-  const table = new Float64Array(GUIDE_NODES + 1);
-  oimlCoefficientsInP(0, coefficients);
-  const water = coefficients[0];
-  let ethanol = 0;
-  for (let k = 0; k < 12; k++) ethanol += coefficients[k];
-  for (let j = 0; j <= GUIDE_NODES; j++) table[j] = solveInP(water + (ethanol - water) * (j / GUIDE_NODES), false);
-  return table;
-}
-
-function guideGuess(share: number): number {
-  guide ??= buildGuide();
-  const position = Math.min(Math.max(share, 0), 1) * GUIDE_NODES;
-  const j = Math.min(Math.floor(position), GUIDE_NODES - 1);
-  return guide[j] + (guide[j + 1] - guide[j]) * (position - j);
-}
-
 /** Inverse of the OIML R 22 equation: mass fraction from density and temperature, to 1e-10. */
 export function massFractionFromDensity(density: KgPerCubicMetre, temperature: Celsius): MassFraction {
   requireOimlRange(0, temperature);
-  if (!guide) guide = buildGuide();
   // The pure-end densities come free from the coefficients: c0 at p = 0, their sum at p = 1.
   oimlCoefficientsInP(temperature - 20, coefficients);
   const water = coefficients[0];
   let ethanol = 0;
   for (let k = 0; k < 12; k++) ethanol += coefficients[k];
   requireInRange('density', density, ethanol - END_SLACK, water + END_SLACK, 'kg/m³');
-  return solveInP(density, false, guideGuess);
+  return solveInP(density, false, (share) => guessMassFraction(share, temperature));
 }
 
 /**
