@@ -35,5 +35,5 @@ export const ETHANOL_WATER_ENTRIES: CatalogueEntry[] = [
     '{addedVolume L, finalVolume L, finalPercentVolume, contractionVolume L}', ew.blendToTarget),
   e('analyseDistillate', "beer's % vol at 20 °C from a distillate's density",
     [num('sampleVolume', 'L'), num('madeUpVolume', 'L'), num('distillateDensity', 'kg/m³'), T],
-    '{distillateMassFraction, distillatePercentVolume20, beerPercentVolume20}', ew.analyseDistillate),
+    '{distillateMassFraction, distillatePercentVolume20, beerPercentVolume20, aboveBeerRange}', ew.analyseDistillate),
 ];

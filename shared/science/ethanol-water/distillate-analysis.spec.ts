@@ -13,6 +13,11 @@ describe('analyseDistillate', () => {
     expect(half.beerPercentVolume20).toBeCloseTo(full.beerPercentVolume20 / 2, 12);
   });
 
+  it('flags a result above the strength of any beer', () => {
+    expect(analyseDistillate(0.1, 0.1, 948, 20).aboveBeerRange).toBe(true);
+    expect(analyseDistillate(0.1, 0.1, 992, 20).aboveBeerRange).toBe(false);
+  });
+
   it('gives 0 % vol for a distillate with the density of water', () => {
     expect(analyseDistillate(0.1, 0.1, 998.2012, 20).beerPercentVolume20).toBeLessThan(0.001);
   });

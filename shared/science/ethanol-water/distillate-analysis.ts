@@ -8,7 +8,12 @@ export interface DistillateAnalysis {
   distillateMassFraction: number;
   distillatePercentVolume20: number;
   beerPercentVolume20: number;
+  /** Above the strength of any beer (20 % vol): a mix-up of sample or volumes, to be checked before use. */
+  aboveBeerRange: boolean;
 }
+
+/** Strength above which a "beer" figure points to a mistake rather than a beer. */
+export const BEER_STRENGTH_LIMIT = 20;
 
 /**
  * Beer % vol at 20 °C from its distillate: the sample (volume at 20 °C) is distilled and the
@@ -23,9 +28,6 @@ export function analyseDistillate(
   requireInRange('madeUpVolume', madeUpVolume, 0, sampleVolume * 10, 'L');
   const distillateMassFraction = massFractionFromDensity(distillateDensity, temperature);
   const distillatePercentVolume20 = percentVolumeFromMassFraction(distillateMassFraction, 20);
-  return {
-    distillateMassFraction,
-    distillatePercentVolume20,
-    beerPercentVolume20: (distillatePercentVolume20 * madeUpVolume) / sampleVolume,
-  };
+  const beerPercentVolume20 = (distillatePercentVolume20 * madeUpVolume) / sampleVolume;
+  return { distillateMassFraction, distillatePercentVolume20, beerPercentVolume20, aboveBeerRange: beerPercentVolume20 > BEER_STRENGTH_LIMIT };
 }

@@ -44,5 +44,6 @@ export { MASS_FRACTION_TOLERANCE } from './mass-fraction-solver';
 export type { MixContraction } from './excess-volume';
 export type { BlendPlan } from './blending';
 export type { DistillateAnalysis } from './distillate-analysis';
+export { BEER_STRENGTH_LIMIT } from './distillate-analysis';
 export { OIML_A, OIML_B, OIML_C } from './oiml-coefficients';
 export { ETHANOL_MOLAR_MASS, WATER_MOLAR_MASS } from './molar-masses';
