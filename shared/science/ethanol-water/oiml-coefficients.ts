@@ -1,6 +1,8 @@
 // OIML R 22 (1975), International Alcoholometric Tables, density equation coefficients.
 // rho(p, t) = A1 + sum_{k=2..12} A_k p^(k-1) + sum_{k=1..6} B_k (t-20)^k + sum_i sum_k C_{i,k} p^k (t-20)^i
 // with p the mass fraction of ethanol, t in °C (ITS-68 in the original), rho in kg/m³.
+// The same coefficients are printed in the annex of Council Directive 76/766/EEC (alcohol tables);
+// oiml-density.spec.ts checks them against table points at both pure ends and between.
 
 /** A_1 … A_12: the 20 °C polynomial in mass fraction, kg/m³. */
 export const OIML_A: readonly number[] = [
@@ -10,7 +12,7 @@ export const OIML_A: readonly number[] = [
 
 /** B_1 … B_6: pure-water temperature terms, kg/m³ per °C^k. */
 export const OIML_B: readonly number[] = [
-  -2.061851e-1, -5.268254e-3, 3.613001e-5, -3.895770e-7, 7.169354e-9, -9.973923e-11,
+  -2.0618513e-1, -5.2682542e-3, 3.6130013e-5, -3.8957702e-7, 7.1693540e-9, -9.9739231e-11,
 ];
 
 /** C_{i,k}: row i is the power of (t-20), entry k-1 the power k of p. */
