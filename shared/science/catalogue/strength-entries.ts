@@ -14,7 +14,7 @@ export const STRENGTH_ENTRIES: CatalogueEntry[] = [
   e('abvNonLinearEstimate', 'ABV estimate by the non-linear formula', [OG, FG], '% vol', s.abvNonLinearEstimate),
   e('densityBasedAbv', 'density-based % vol at 20 °C', [OG, FG], '% vol', s.densityBasedAbv),
   e('strengthBreakdown', 'density-based % vol at 20 °C with every intermediate', [OG, FG],
-    '{originalExtract °P, apparentExtract °P, realExtract °P, alcoholByMass % m/m, beerDensity20 kg/m³, percentVolume20 % vol, ...}', s.strengthBreakdown),
+    '{originalExtract °P, apparentExtract °P, realExtract °P, attenuations %, alcoholByMass % m/m, beerDensity20 kg/m³, ethanolDensity20 kg/m³, percentVolume20 % vol, linearEstimate, estimateGap, nonLinearEstimate, nonLinearGap}', s.strengthBreakdown),
   e('strengthFromBeerDensity', 'density-based % vol from a beer density read at t, restated to 20 °C',
     [OG, FG, num('beerDensity', 'kg/m³'), num('temperature', '°C')],
     '{originalExtract °P, apparentExtract °P, realExtract °P, alcoholByMass % m/m, ethanolDensity kg/m³, percentVolumeAtT, percentVolume20 % vol}', s.strengthFromBeerDensity),

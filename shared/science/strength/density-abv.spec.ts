@@ -23,6 +23,12 @@ describe('strengthBreakdown', () => {
     }));
   });
 
+  it('reports both estimates beside the density-based figure with their gaps', () => {
+    const s = strengthBreakdown(1.05, 1.01);
+    expect(s.linearEstimate - s.estimateGap).toBeCloseTo(s.percentVolume20, 12);
+    expect(s.nonLinearEstimate - s.nonLinearGap).toBeCloseTo(s.percentVolume20, 12);
+  });
+
   // Product brief: the linear rule drifts from the density-based figure, more for strong beers.
   it('shows a larger estimate gap for a strong beer than for a light one at the same attenuation', () => {
     const light = strengthBreakdown(1.04, 1.01);

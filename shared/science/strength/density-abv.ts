@@ -2,7 +2,7 @@ import { platoFromSg } from '../gravity/plato';
 import { pureEthanolDensity } from '../ethanol-water/oiml-density';
 import { waterDensity } from '../water-density/tanaka-water-density';
 import type { SpecificGravity } from '../units/unit-types';
-import { requireGravityPair, abvLinearEstimate } from './abv-estimates';
+import { abvLinearEstimate, abvNonLinearEstimate, requireGravityPair } from './abv-estimates';
 import { alcoholByMass, realExtract } from './balling';
 
 /** Every intermediate of the density-based strength, so the app can show the working. */
@@ -19,6 +19,9 @@ export interface StrengthBreakdown {
   linearEstimate: number;
   /** Linear estimate minus the density-based % vol. */
   estimateGap: number;
+  nonLinearEstimate: number;
+  /** Non-linear estimate minus the density-based % vol. */
+  nonLinearGap: number;
 }
 
 /**
@@ -35,12 +38,14 @@ export function strengthBreakdown(og: SpecificGravity, fg: SpecificGravity): Str
   const ethanolDensity20 = pureEthanolDensity(20);
   const percentVolume20 = (abw * beerDensity20) / ethanolDensity20;
   const linearEstimate = abvLinearEstimate(og, fg);
+  const nonLinearEstimate = abvNonLinearEstimate(og, fg);
   return {
     originalExtract, apparentExtract, realExtract: re,
     apparentAttenuation: (100 * (originalExtract - apparentExtract)) / originalExtract,
     realAttenuation: (100 * (originalExtract - re)) / originalExtract,
     alcoholByMass: abw, beerDensity20, ethanolDensity20, percentVolume20,
     linearEstimate, estimateGap: linearEstimate - percentVolume20,
+    nonLinearEstimate, nonLinearGap: nonLinearEstimate - percentVolume20,
   };
 }
 
