@@ -1,8 +1,8 @@
 import { Locator, Page } from 'playwright-core';
 
-/** Picks an option of a Material select by the option's visible text. */
+/** Picks an option of a Material select by the option's visible text; taps its field, as a finger would. */
 async function choose(select: Locator, optionText: string): Promise<void> {
-  await select.click();
+  await select.locator('xpath=ancestor::mat-form-field').click();
   await select.page().getByRole('option', { name: optionText }).click();
 }
 
@@ -43,6 +43,16 @@ export const recipeEditorPage = {
     return ((await page.getByTestId(`prediction-${figure}`).textContent()) ?? '').trim();
   },
 
+  /** Waits until a predicted figure shows something other than `text`. */
+  async waitForChange(page: Page, figure: 'og' | 'ibu', text: string): Promise<void> {
+    await page.getByTestId(`prediction-${figure}`).filter({ hasNotText: new RegExp(`^\\s*${text.replace('.', '\\.')}\\s*$`) }).waitFor();
+  },
+
+  /** Waits until the form shows the batch volume given. */
+  async waitForBatchVolume(page: Page, volume: string): Promise<void> {
+    await page.waitForFunction((expected) => document.querySelector<HTMLInputElement>('input[formcontrolname="batchVolume"]')?.value === expected, volume);
+  },
+
   /** Saves and waits for the saved version's number in the page. */
   async save(page: Page, expectedVersion: number): Promise<void> {
     await page.getByRole('button', { name: 'Save', exact: true }).click();
@@ -68,5 +78,23 @@ export const recipeVersionsPage = {
     const table = page.getByRole('region', { name: 'Version comparison' });
     await table.waitFor();
     return table;
+  },
+};
+
+/** The ingredient catalogue: tabs per kind, entry form, CSV import with its preview. */
+export const cataloguePage = {
+  async open(page: Page, tab: 'Fermentables' | 'Hops' | 'Yeasts' | 'Other additions'): Promise<void> {
+    await page.goto('/recipes/catalogue');
+    await page.getByRole('heading', { level: 1, name: 'Ingredient catalogue' }).waitFor();
+    await page.getByRole('tab', { name: tab }).click();
+  },
+
+  async chooseCsv(page: Page, label: string, csv: string): Promise<void> {
+    await page.getByLabel(label).setInputFiles({ name: 'catalogue.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    await page.getByRole('heading', { name: /^Import preview/ }).waitFor();
+  },
+
+  async problems(page: Page): Promise<string[]> {
+    return (await page.getByTestId('import-problems').locator('li').allTextContents()).map((text) => text.trim());
   },
 };
