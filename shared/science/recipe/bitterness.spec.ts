@@ -1,4 +1,4 @@
-import { bitternessRatio, tinsethIbu, totalTinsethIbu } from './bitterness';
+import { bitternessRatio, tinsethIbu, tinsethUtilisation, totalTinsethIbu } from './bitterness';
 
 describe('Tinseth IBU', () => {
   // Tinseth's published equation, hand-worked: 28 g at 6 % α, 60 min, 20 L, boil gravity 1.050:
@@ -6,6 +6,11 @@ describe('Tinseth IBU', () => {
   // α added 0.06 × 28 000 mg / 20 L = 84 mg/L → 19.38 IBU.
   it('gives 19.38 IBU for the hand-worked addition', () => {
     expect(tinsethIbu({ grams: 28, alphaPercent: 6, minutes: 60 }, 1.05, 20)).toBeCloseTo(19.376, 2);
+  });
+
+  // Tinseth's published utilisation table (from memory): 0.231 at boil gravity 1.050 and 60 minutes.
+  it('gives utilisation 0.231 at 1.050 and 60 minutes', () => {
+    expect(tinsethUtilisation(1.05, 60)).toBeCloseTo(0.231, 3);
   });
 
   it('gives nothing for a flame-out addition (0 min)', () => {
