@@ -108,6 +108,18 @@ describe('RecipeEditorPage', () => {
       expect(Number(shown('prediction-og'))).toBeGreaterThan(Number(before[0]));
     });
 
+    it('shows what is typed in US units after the switch, with the same OG', async () => {
+      await addFermentable('Pale base malt', '4.2');
+      const og = shown('prediction-og');
+
+      [...element.querySelectorAll<HTMLButtonElement>('mat-button-toggle button')].find((b) => b.textContent?.includes('US'))!.click();
+      await stable();
+
+      expect(element.querySelector<HTMLInputElement>('input[formcontrolname="batchVolume"]')!.value).toBe('5.283');
+      expect(lastRow('Fermentable').querySelector<HTMLInputElement>('input[formcontrolname="amount"]')!.value).toBe('9.259');
+      expect(shown('prediction-og')).toBe(og);
+    });
+
     it('shows the message at the field and saves nothing when the batch volume is cleared', async () => {
       const store = TestBed.inject(Store);
       jest.spyOn(store, 'dispatch');

@@ -83,6 +83,7 @@ export const recipesFeature = createFeature({
     on(RecipeEditorPageActions.existingOpened, BrewDaySheetPageActions.opened, RecipeVersionsPageActions.opened, (state, { recipeId }): RecipesState => ({
       ...state,
       current: state.current?.id === recipeId ? state.current : null,
+      draft: state.current?.id === recipeId ? state.draft : null,
       currentLoading: true,
       currentError: null,
     })),

@@ -1,0 +1,70 @@
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import { MockStore, provideMockStore } from '@ngrx/store/testing';
+import { DEFAULT_BREWHOUSE_SETTINGS, generateMockCatalogue } from '@shared/recipes';
+import { CataloguePageActions } from '../state/catalogue-page.actions';
+import { selectBrewhouseOrDefault, selectCataloguePageViewModel } from '../state/catalogue.selectors';
+import { CataloguePage } from './catalogue-page';
+
+describe('CataloguePage', () => {
+  async function render(canEdit: boolean) {
+    const catalogue = generateMockCatalogue();
+    TestBed.configureTestingModule({
+      imports: [CataloguePage],
+      providers: [
+        provideRouter([]),
+        provideMockStore({
+          selectors: [
+            {
+              selector: selectCataloguePageViewModel,
+              value: {
+                entries: catalogue,
+                styles: [],
+                brewhouse: null,
+                canEdit,
+                includeRetired: false,
+                search: '',
+                loading: false,
+                loadError: null,
+                saving: false,
+                savedCount: 0,
+                importPreview: null,
+                importing: false,
+              },
+            },
+            { selector: selectBrewhouseOrDefault, value: DEFAULT_BREWHOUSE_SETTINGS },
+          ],
+        }),
+      ],
+    });
+    const store = TestBed.inject(MockStore);
+    jest.spyOn(store, 'dispatch');
+    const fixture = TestBed.createComponent(CataloguePage);
+    await fixture.whenStable();
+    return { store, element: fixture.nativeElement as HTMLElement };
+  }
+
+  it('dispatches Opened and lists the fermentables first', async () => {
+    const { store, element } = await render(false);
+
+    expect(store.dispatch).toHaveBeenCalledWith(CataloguePageActions.opened());
+    expect(element.querySelector('tbody th')?.textContent).toContain('Pale base malt');
+  });
+
+  it('offers a member no edit, retire, add or import', async () => {
+    const { element } = await render(false);
+
+    expect(element.querySelector('cw-catalogue-entry-form')).toBeNull();
+    expect(element.textContent).not.toContain('Import from a CSV file');
+    expect([...element.querySelectorAll('button')].some((b) => b.textContent?.trim() === 'Retire')).toBe(false);
+  });
+
+  it('lets a brewer retire an entry with one event', async () => {
+    const { store, element } = await render(true);
+
+    element.querySelector<HTMLButtonElement>('button[aria-label="Retire Pale base malt"]')!.click();
+
+    expect(store.dispatch).toHaveBeenCalledWith(CataloguePageActions.entryRetiredChanged({ kind: 'fermentables', id: 1, retired: true }));
+    expect(element.textContent).toContain('Import from a CSV file');
+  });
+});
