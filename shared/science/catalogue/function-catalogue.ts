@@ -4,10 +4,11 @@ import { GRAVITY_ENTRIES } from './gravity-entries';
 import { STRENGTH_ENTRIES } from './strength-entries';
 import { RECIPE_ENTRIES } from './recipe-entries';
 import { CARBONATION_ENTRIES } from './carbonation-entries';
+import { ANALYSIS_ENTRIES } from './analysis-entries';
 
 /** Every public function that can be called by name, in a stable order. */
 export const FUNCTION_CATALOGUE: readonly CatalogueEntry[] = [
-  ...GRAVITY_ENTRIES, ...ETHANOL_WATER_ENTRIES, ...STRENGTH_ENTRIES, ...RECIPE_ENTRIES, ...CARBONATION_ENTRIES,
+  ...GRAVITY_ENTRIES, ...ETHANOL_WATER_ENTRIES, ...STRENGTH_ENTRIES, ...RECIPE_ENTRIES, ...CARBONATION_ENTRIES, ...ANALYSIS_ENTRIES,
 ];
 
 /** A catalogue listing without the callables, ready to print as JSON. */

@@ -7,5 +7,8 @@ export { toleranceVerdict } from './measurement-uncertainty';
 export { hydrometerStrengthUncertainty } from './strength-uncertainty';
 /** Strength from original and current refractometer °Bx, with propagated resolution uncertainty. */
 export { refractometerStrengthUncertainty } from './strength-uncertainty';
+/** Beer % vol at 20 °C from a distillate analysis, with the uncertainty propagated from instrument resolution. */
+export { distillateStrengthUncertainty } from './distillate-uncertainty';
+export type { DistillateResolutions } from './distillate-uncertainty';
 export type { UncertainValue, ToleranceVerdict } from './measurement-uncertainty';
 export type { HydrometerStrengthInput, StrengthWithUncertainty } from './strength-uncertainty';
