@@ -5,6 +5,7 @@ export * from './recipe-design';
 export * from './recipe';
 export * from './recipes-api';
 export * from './style-comparison';
+export * from './recipe-prediction-model';
 export * from './recipe-prediction';
 export * from './recipe-units';
 export * from './scale-recipe';

@@ -10,67 +10,15 @@ import {
   strikeWaterTemperature,
   tinsethIbu,
 } from '@shared/science';
-import type { StrengthBreakdown } from '@shared/science';
 import { BrewhouseSettings } from './brewhouse-settings';
 import { Fermentable, FermentableKind, IngredientCatalogue } from './ingredient';
 import { HopItem, HopUse, RecipeDesign } from './recipe-design';
+import { FermentableShare, HopBitterness, RecipePrediction, RecipeWaterPlan } from './recipe-prediction-model';
 import { compareFiguresToStyle, StyleTargetComparison } from './style-comparison';
 import { StyleTarget } from './style-target';
 
-/** One fermentable's part of the grain bill. */
-export interface FermentableShare {
-  index: number;
-  fermentableId: number;
-  name: string;
-  amountKg: number;
-  /** % of the bill by mass. */
-  sharePercent: number;
-  maxSharePercent: number | null;
-  aboveUsualMax: boolean;
-}
-
-/** One hop addition's bitterness. */
-export interface HopBitterness {
-  index: number;
-  hopId: number;
-  name: string;
-  use: HopUse;
-  time: number;
-  amountGrams: number;
-  ibu: number;
-}
-
-/** The water a brew day needs, from the co-op's brewhouse settings. */
-export interface RecipeWaterPlan {
-  strikeLitres: number;
-  spargeLitres: number;
-  strikeTemperatureC: number;
-  preBoilLitres: number;
-  preBoilGravity: number;
-}
-
-/** Everything the editor predicts for a design; a figure is null while its inputs are missing. */
-export interface RecipePrediction {
-  og: number | null;
-  fg: number | null;
-  /** % vol by the linear OG/FG rule. */
-  abvEstimate: number | null;
-  /** % vol at 20 °C by Balling and the densities of beer and ethanol. */
-  abvDensityBased: number | null;
-  strength: StrengthBreakdown | null;
-  ibu: number | null;
-  hopBitterness: HopBitterness[];
-  colourSrm: number | null;
-  colourEbc: number | null;
-  buGu: number | null;
-  shares: FermentableShare[];
-  waterPlan: RecipeWaterPlan | null;
-  /** Why a figure could not be predicted, in words. */
-  problems: string[];
-}
-
 /** Kinds whose extract comes from the mash, so the mash efficiency applies to them. */
-const MASHED_KINDS: readonly FermentableKind[] = ['grain', 'adjunct'];
+export const MASHED_KINDS: readonly FermentableKind[] = ['grain', 'adjunct'];
 
 /** Runs one figure's calculation; a refused input becomes a problem in words instead of a figure. */
 function attempt<T>(problems: string[], what: string, calculate: () => T): T | null {

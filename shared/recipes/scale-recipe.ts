@@ -1,7 +1,7 @@
 import { BrewhouseSettings } from './brewhouse-settings';
-import { FermentableKind, IngredientCatalogue } from './ingredient';
+import { IngredientCatalogue } from './ingredient';
 import { RecipeDesign } from './recipe-design';
-import { predictRecipe } from './recipe-prediction';
+import { MASHED_KINDS, predictRecipe } from './recipe-prediction';
 
 /** Where a design is scaled to. */
 export interface ScaleTarget {
@@ -9,7 +9,6 @@ export interface ScaleTarget {
   mashEfficiencyPercent: number;
 }
 
-const MASHED_KINDS: readonly FermentableKind[] = ['grain', 'adjunct'];
 const MAX_CORRECTIONS = 8;
 const TOLERANCE = 1e-9;
 

@@ -1,10 +1,14 @@
 import { Routes } from '@angular/router';
 import { provideEffects } from '@ngrx/effects';
 import { provideState } from '@ngrx/store';
+import * as catalogueSnackBarEffects from './state/catalogue-snack-bar.effects';
 import * as catalogueEffects from './state/catalogue.effects';
 import { catalogueFeature } from './state/catalogue.feature';
-import * as recipesEffects from './state/recipes.effects';
+import * as preferencesEffects from './state/preferences.effects';
+import * as recipeFileEffects from './state/recipe-file.effects';
+import * as recipeVersionsEffects from './state/recipe-versions.effects';
 import * as recipesSnackBarEffects from './state/recipes-snack-bar.effects';
+import * as recipesEffects from './state/recipes.effects';
 import { recipesFeature } from './state/recipes.feature';
 
 export const recipesRoutes: Routes = [
@@ -13,7 +17,15 @@ export const recipesRoutes: Routes = [
     providers: [
       provideState(recipesFeature),
       provideState(catalogueFeature),
-      provideEffects(recipesEffects, recipesSnackBarEffects, catalogueEffects),
+      provideEffects(
+        recipesEffects,
+        recipeFileEffects,
+        recipeVersionsEffects,
+        preferencesEffects,
+        recipesSnackBarEffects,
+        catalogueEffects,
+        catalogueSnackBarEffects,
+      ),
     ],
     children: [
       { path: '', loadComponent: () => import('./recipe-list-page/recipe-list-page').then((m) => m.RecipeListPage) },

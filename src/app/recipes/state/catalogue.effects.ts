@@ -1,7 +1,6 @@
 import { inject } from '@angular/core';
-import { MatSnackBar } from '@angular/material/snack-bar';
 import { Actions, createEffect, ofType } from '@ngrx/effects';
-import { catchError, concatMap, exhaustMap, filter, map, merge, mergeMap, of, switchMap, tap } from 'rxjs';
+import { catchError, concatMap, exhaustMap, filter, map, merge, mergeMap, of, switchMap } from 'rxjs';
 import { apiErrorMessage } from '@app/core/api-error-message';
 import { CatalogueClient } from '../catalogue-client';
 import { BrewDaySheetPageActions } from './brew-day-sheet-page.actions';
@@ -10,8 +9,6 @@ import { CataloguePageActions } from './catalogue-page.actions';
 import { RecipeEditorPageActions } from './recipe-editor-page.actions';
 import { RecipeListPageActions } from './recipe-list-page.actions';
 import { RecipeVersionsPageActions } from './recipe-versions-page.actions';
-
-const SNACK_DURATION_MS = 5000;
 
 /** Pages that need the catalogue, the style list and the brewhouse to show predictions. */
 const pagesNeedingCatalogue = [
@@ -141,45 +138,4 @@ export const saveBrewhouse = createEffect(
       ),
     ),
   { functional: true },
-);
-
-export const showCatalogueSuccess = createEffect(
-  (actions$ = inject(Actions), snackBar = inject(MatSnackBar)) =>
-    actions$.pipe(
-      ofType(CatalogueApiActions.entrySavedSuccess, CatalogueApiActions.styleSavedSuccess, CatalogueApiActions.brewhouseSavedSuccess, CatalogueApiActions.importCommittedSuccess),
-      map((action) => {
-        switch (action.type) {
-          case CatalogueApiActions.entrySavedSuccess.type:
-            return `Saved ${action.entry.name}${action.entry.retired ? ' (retired)' : ''}.`;
-          case CatalogueApiActions.styleSavedSuccess.type:
-            return `Saved the style ${action.style.name}.`;
-          case CatalogueApiActions.brewhouseSavedSuccess.type:
-            return 'Saved the brewhouse settings.';
-          default:
-            return action.result.imported > 0
-              ? `Imported ${action.result.imported} entries.`
-              : `Nothing imported: ${action.result.problems.length} rows need fixing.`;
-        }
-      }),
-      tap((message) => snackBar.open(message, 'Dismiss', { duration: SNACK_DURATION_MS })),
-    ),
-  { functional: true, dispatch: false },
-);
-
-export const showCatalogueFailure = createEffect(
-  (actions$ = inject(Actions), snackBar = inject(MatSnackBar)) =>
-    actions$.pipe(
-      ofType(
-        CatalogueApiActions.catalogueLoadedFailure,
-        CatalogueApiActions.stylesLoadedFailure,
-        CatalogueApiActions.brewhouseLoadedFailure,
-        CatalogueApiActions.entrySavedFailure,
-        CatalogueApiActions.importPreviewedFailure,
-        CatalogueApiActions.importCommittedFailure,
-        CatalogueApiActions.styleSavedFailure,
-        CatalogueApiActions.brewhouseSavedFailure,
-      ),
-      tap(({ message }) => snackBar.open(message, 'Dismiss', { duration: SNACK_DURATION_MS })),
-    ),
-  { functional: true, dispatch: false },
 );

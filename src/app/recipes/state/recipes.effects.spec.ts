@@ -9,7 +9,9 @@ import { RecipeEditorPageActions } from './recipe-editor-page.actions';
 import { RecipeListPageActions } from './recipe-list-page.actions';
 import { RecipeVersionsPageActions } from './recipe-versions-page.actions';
 import { RecipesApiActions } from './recipes-api.actions';
-import { exportRecipe, importRecipe, loadVersionPair, saveRecipe, updateRecipe } from './recipes.effects';
+import { exportRecipe, importRecipe } from './recipe-file.effects';
+import { loadVersionPair } from './recipe-versions.effects';
+import { saveRecipe, updateRecipe } from './recipes.effects';
 
 const actionsOf = (...actions: Action[]) => new Actions(of(...actions));
 const fakeClient = (overrides: Partial<Record<keyof RecipesClient, (...args: never[]) => Observable<unknown>>>) => overrides as unknown as RecipesClient;
