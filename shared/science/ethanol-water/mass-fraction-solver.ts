@@ -16,9 +16,10 @@ const END_SLACK = 1e-6;
 /**
  * Root of f(p) = sum c_k p^k − target on [0, 1] by Newton steps kept inside a shrinking
  * bracket (bisection when a step leaves it); f is monotone over the range, so the bracket holds.
- * The start comes from `guess` given where the target sits between the two ends (0 to 1).
+ * The start is the guide curve at `guideTemperature` when given, else the share of the way
+ * the target sits between the two ends.
  */
-function solveInP(target: number, weightByP: boolean, guess: (share: number) => number = (share) => share): number {
+function solveInP(target: number, weightByP: boolean, guideTemperature?: number): number {
   const c = coefficients;
   let lo = 0;
   let hi = 1;
@@ -27,7 +28,8 @@ function solveInP(target: number, weightByP: boolean, guess: (share: number) => 
   for (let k = 0; k < 12; k++) fHi += c[k];
   if (fLo === 0 || (fLo > 0) === (fHi > 0)) return Math.abs(fLo) <= Math.abs(fHi) ? 0 : 1;
   if (fHi === 0) return 1;
-  let p = guess(fLo / (fLo - fHi));
+  const share = fLo / (fLo - fHi);
+  let p = guideTemperature === undefined ? share : guessMassFraction(share, guideTemperature);
   for (let iteration = 0; iteration < 60; iteration++) {
     let value = c[11];
     let slope = 0;
@@ -61,7 +63,7 @@ export function massFractionFromDensity(density: KgPerCubicMetre, temperature: C
   let ethanol = 0;
   for (let k = 0; k < 12; k++) ethanol += coefficients[k];
   requireInRange('density', density, ethanol - END_SLACK, water + END_SLACK, 'kg/m³');
-  return solveInP(density, false, (share) => guessMassFraction(share, temperature));
+  return solveInP(density, false, temperature);
 }
 
 /**
