@@ -58,7 +58,7 @@ async function main(): Promise<void> {
     const secrets = readOrCreateSecrets(home);
     const dbPort = Number(process.env.DB_PORT ?? 3407);
     mariadb = await startPrivateMariaDb({ home, port: dbPort });
-    const config = loadConfig({ ...process.env, DB_PORT: String(dbPort), DB_PASSWORD: secrets.dbPassword, SESSION_SECRET: secrets.sessionSecret });
+    const config = loadConfig({ ...process.env, DB_PORT: String(mariadb.port), DB_PASSWORD: secrets.dbPassword, SESSION_SECRET: secrets.sessionSecret });
     ensureDatabaseAndUser(mariadb, config.db, false);
     knex = await openMigratedDb(config.db);
     await seed(knex);

@@ -5,6 +5,7 @@ import { Knex } from 'knex';
 import { loadConfig } from '../server/config';
 import { ensureDatabaseAndUser, openMigratedDb } from './setup/app-database';
 import { buildClientIfStale } from './setup/client-build';
+import { freePort } from './setup/free-port';
 import { readOrCreateSecrets } from './setup/local-secrets';
 import { PrivateMariaDb, startPrivateMariaDb } from './setup/private-mariadb';
 import { reportFailure, step } from './setup/step-log';
@@ -30,12 +31,13 @@ async function main(): Promise<number> {
   try {
     ensureSystemPackages(['mariadb-server', 'chromium']);
     const secrets = readOrCreateSecrets(home);
-    const dbPort = Number(process.env.TEST_DB_PORT ?? 3408);
+    // A free port unless one is asked for, so two checkouts can test at the same time.
+    const dbPort = process.env.TEST_DB_PORT ? Number(process.env.TEST_DB_PORT) : await freePort();
     mariadb = await startPrivateMariaDb({ home, port: dbPort });
     const env = {
       ...process.env,
       NODE_ENV: 'test',
-      DB_PORT: String(dbPort),
+      DB_PORT: String(mariadb.port),
       DB_NAME: 'commonwort_test',
       DB_USER: 'commonwort_test',
       DB_PASSWORD: secrets.dbPassword,

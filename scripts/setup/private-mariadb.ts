@@ -1,5 +1,5 @@
 import { spawn, spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { SetupError, step } from './step-log';
 
@@ -25,6 +25,7 @@ function paths(home: string) {
     socket: join(home, 'mysqld.sock'),
     pidFile: join(home, 'mysqld.pid'),
     logFile: join(home, 'mysqld.log'),
+    portFile: join(home, 'mysqld.port'),
   };
 }
 
@@ -85,7 +86,8 @@ function handleLeftovers(p: ReturnType<typeof paths>): 'reuse' | 'clean' {
   return 'clean';
 }
 
-async function waitUntilReady(socket: string, logFile: string, exited: () => boolean): Promise<void> {
+async function waitUntilReady(p: ReturnType<typeof paths>, port: number, home: string, exited: () => boolean): Promise<void> {
+  const { socket, logFile } = p;
   for (let i = 0; i < 300; i++) {
     if (ping(socket)) return;
     if (exited()) break;
@@ -94,7 +96,7 @@ async function waitUntilReady(socket: string, logFile: string, exited: () => boo
   const log = existsSync(logFile) ? readFileSync(logFile, 'utf8').split('\n').slice(-15).join('\n') : '(no log)';
   throw new SetupError(
     `The private MariaDB did not start. Last lines of ${logFile}:\n${log}`,
-    'if the port is taken, set DB_PORT to a free port; if the data folder is damaged, delete it and run again.',
+    `if port ${port} is taken, stop what uses it or choose another port (DB_PORT for npm start, TEST_DB_PORT for npm test); if the data folder is damaged, delete ${home} and run again.`,
   );
 }
 
@@ -125,14 +127,18 @@ function launch(p: ReturnType<typeof paths>, port: number) {
 }
 
 /** Starts (or reuses) the private server whose files live in `home`. */
-export async function startPrivateMariaDb({ home, port }: PrivateMariaDbOptions): Promise<PrivateMariaDb> {
+export async function startPrivateMariaDb({ home, port: requestedPort }: PrivateMariaDbOptions): Promise<PrivateMariaDb> {
   const p = paths(home);
+  let port = requestedPort;
   if (!existsSync(join(p.datadir, 'mysql'))) initialise(p.datadir);
-  if (handleLeftovers(p) === 'reuse') {
+  if (handleLeftovers(p) === 'reuse' && existsSync(p.portFile)) {
+    // A server left running keeps the port it was started on.
+    port = Number(readFileSync(p.portFile, 'utf8'));
     step(`Reusing the private MariaDB already running on 127.0.0.1:${port}`);
   } else {
+    writeFileSync(p.portFile, String(port));
     step(`Starting a private MariaDB on 127.0.0.1:${port} (data in ${p.datadir})`);
-    await waitUntilReady(p.socket, p.logFile, launch(p, port));
+    await waitUntilReady(p, port, home, launch(p, port));
   }
   return {
     port,

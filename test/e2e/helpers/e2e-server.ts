@@ -1,4 +1,3 @@
-import { createServer, Server } from 'node:net';
 import { Server as HttpServer } from 'node:http';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
@@ -6,23 +5,13 @@ import { Knex } from 'knex';
 import { createApp } from '@server/app';
 import { loadConfig } from '@server/config';
 import { createDb } from '@server/db';
+import { freePort } from '../../../scripts/setup/free-port';
 
 /** The real server with the built app, on a free loopback port, against the test database. */
 export interface E2eServer {
   baseUrl: string;
   db: Knex;
   stop(): Promise<void>;
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe: Server = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as { port: number };
-      probe.close(() => resolve(port));
-    });
-  });
 }
 
 export async function startE2eServer(): Promise<E2eServer> {
