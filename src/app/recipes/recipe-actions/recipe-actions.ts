@@ -18,6 +18,8 @@ export class RecipeActions {
   readonly recipe = input<Recipe | null>(null);
   readonly saving = input(false);
   readonly unitSystem = input<UnitSystem>('metric');
+  /** Admins may archive any recipe, not only their own. */
+  readonly canArchiveAny = input(false);
   readonly scaleOpened = output<void>();
   readonly cloneRequested = output<void>();
   readonly visibilityChanged = output<RecipeVisibility>();

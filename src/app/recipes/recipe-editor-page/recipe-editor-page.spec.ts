@@ -5,6 +5,7 @@ import { provideState, provideStore, Store } from '@ngrx/store';
 import { MockStore, provideMockStore } from '@ngrx/store/testing';
 import { generateMockCatalogue, MOCK_BREWHOUSE, predictRecipe, RecipeDesign } from '@shared/recipes';
 import { generateMockRecipe } from '@app/testing/recipe-mock';
+import { authFeature } from '@app/auth/state/auth.feature';
 import { emptyDesign } from '../recipe-form/recipe-form-model';
 import { CatalogueApiActions } from '../state/catalogue-api.actions';
 import { catalogueFeature } from '../state/catalogue.feature';
@@ -172,6 +173,16 @@ describe('RecipeEditorPage', () => {
       expect([...element.querySelectorAll('button')].some((b) => b.textContent?.trim() === 'Save')).toBe(false);
       expect(element.querySelector('mat-slide-toggle')).toBeNull();
       expect(element.querySelector<HTMLInputElement>('input[formcontrolname="name"]')!.disabled).toBe(true);
+    });
+
+    it('lets an admin archive someone else’s recipe', async () => {
+      store.overrideSelector(authFeature.selectIsAdmin, true);
+      fixture.componentRef.setInput('recipeId', '41');
+      await stable();
+
+      button('Archive').click();
+
+      expect(store.dispatch).toHaveBeenCalledWith(RecipeEditorPageActions.archiveToggled({ recipeId: 41, archived: true }));
     });
   });
 });

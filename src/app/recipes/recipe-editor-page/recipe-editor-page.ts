@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal, untracked } from '@angular/core';
 import { Store } from '@ngrx/store';
+import { authFeature } from '@app/auth/state/auth.feature';
 import { RecipeDesign, RecipeVisibility, UnitSystem } from '@shared/recipes';
 import { PredictionPanel } from '../prediction-panel/prediction-panel';
 import { RecipeActions } from '../recipe-actions/recipe-actions';
@@ -25,6 +26,7 @@ export class RecipeEditorPage {
   protected readonly prediction = this.store.selectSignal(selectEditorPrediction);
   protected readonly comparisons = this.store.selectSignal(selectEditorStyleComparison);
   protected readonly style = this.store.selectSignal(selectEditorStyle);
+  protected readonly isAdmin = this.store.selectSignal(authFeature.selectIsAdmin);
   protected readonly scaling = signal(false);
   protected readonly heading = computed(() => {
     const recipe = this.vm().recipe;

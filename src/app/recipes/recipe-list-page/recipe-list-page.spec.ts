@@ -15,7 +15,7 @@ describe('RecipeListPage', () => {
         provideRouter([]),
         provideMockStore({
           selectors: [
-            { selector: selectRecipeListViewModel, value: { recipes: [{ ...summary, styleName: 'Co-op pale' }], search: '', includeArchived: false, loading: false, error: null } },
+            { selector: selectRecipeListViewModel, value: { recipes: [{ ...summary, styleName: 'Co-op pale', batchVolume: '20 L' }], search: '', includeArchived: false, loading: false, error: null } },
           ],
         }),
       ],

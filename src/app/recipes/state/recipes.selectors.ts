@@ -1,5 +1,5 @@
 import { createSelector } from '@ngrx/store';
-import { compareToStyle, predictRecipe } from '@shared/recipes';
+import { compareToStyle, predictRecipe, shownAmountText } from '@shared/recipes';
 import { emptyDesign } from '../recipe-form/recipe-form-model';
 import { designDifferences } from '../version-diff/design-differences';
 import { brewDaySheet } from '../brew-day-sheet/brew-day-sheet-model';
@@ -15,12 +15,17 @@ export const selectRecipeListViewModel = createSelector(
   recipesFeature.selectListLoading,
   recipesFeature.selectListError,
   catalogueFeature.selectStyles,
-  (recipes, search, includeArchived, loading, error, styles) => {
+  recipesFeature.selectUnitSystem,
+  (recipes, search, includeArchived, loading, error, styles, unitSystem) => {
     const words = search.trim().toLowerCase();
     return {
       recipes: recipes
         .filter((recipe) => !words || `${recipe.name} ${recipe.ownerName}`.toLowerCase().includes(words))
-        .map((recipe) => ({ ...recipe, styleName: recipe.styleId === null ? null : (styles.entities[recipe.styleId]?.name ?? null) })),
+        .map((recipe) => ({
+          ...recipe,
+          styleName: recipe.styleId === null ? null : (styles.entities[recipe.styleId]?.name ?? null),
+          batchVolume: shownAmountText('volume', recipe.batchVolumeLitres, unitSystem),
+        })),
       search,
       includeArchived,
       loading,
