@@ -11,6 +11,9 @@ export type HopGroup = FormGroup<{ hopId: FormControl<number | null>; amount: Fo
 export type MashStepGroup = FormGroup<{ name: FormControl<string>; temperature: FormControl<number | null>; minutes: FormControl<number | null> }>;
 export type OtherGroup = FormGroup<{ otherId: FormControl<number | null>; amount: FormControl<number | null>; unit: FormControl<string>; when: FormControl<string> }>;
 
+/** The longest boil or hop time the science library's Tinseth utilisation accepts, min. */
+export const MAX_MINUTES = 240;
+
 const positive = [Validators.required, Validators.min(0.001)];
 
 /** Builds the form's row groups with their validators. */
@@ -26,7 +29,7 @@ export function recipeRowGroups(fb: NonNullableFormBuilder) {
       return fb.group({
         hopId: fb.control<number | null>(row.hopId, Validators.required),
         amount: fb.control<number | null>(row.amount, [...positive, Validators.max(10000)]),
-        time: fb.control<number | null>(row.time, [Validators.required, Validators.min(0), Validators.max(360)]),
+        time: fb.control<number | null>(row.time, [Validators.required, Validators.min(0), Validators.max(MAX_MINUTES)]),
         use: fb.control<HopUse>(row.use, Validators.required),
       });
     },

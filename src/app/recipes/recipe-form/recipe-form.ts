@@ -10,7 +10,7 @@ import { FermentableRows } from '../fermentable-rows/fermentable-rows';
 import { HopRows } from '../hop-rows/hop-rows';
 import { MashStepRows } from '../mash-step-rows/mash-step-rows';
 import { OtherRows } from '../other-rows/other-rows';
-import { recipeRowGroups } from './recipe-form-groups';
+import { MAX_MINUTES, recipeRowGroups } from './recipe-form-groups';
 import { designToFormValue, formValueToDesign, RecipeFormValue } from './recipe-form-model';
 
 /** The recipe as a reactive form in the person's units; emits the design (SI) as it is typed. */
@@ -41,7 +41,7 @@ export class RecipeForm {
     styleId: this.fb.control<number | null>(null),
     batchVolume: this.fb.control<number | null>(null, [Validators.required, Validators.min(0.5), Validators.max(10000)]),
     mashEfficiencyPercent: this.fb.control<number | null>(null, [Validators.required, Validators.min(20), Validators.max(100)]),
-    boilMinutes: this.fb.control<number | null>(null, [Validators.required, Validators.min(0), Validators.max(360)]),
+    boilMinutes: this.fb.control<number | null>(null, [Validators.required, Validators.min(0), Validators.max(MAX_MINUTES)]),
     yeastId: this.fb.control<number | null>(null),
     notes: ['', Validators.maxLength(4000)],
     fermentables: this.fb.array([this.rows.fermentable()]),
