@@ -5,7 +5,7 @@ import { provideState, provideStore, Store } from '@ngrx/store';
 import { MockStore, provideMockStore } from '@ngrx/store/testing';
 import { generateMockCatalogue, MOCK_BREWHOUSE, predictRecipe, RecipeDesign } from '@shared/recipes';
 import { generateMockRecipe } from '@app/testing/recipe-mock';
-import { authFeature } from '@app/auth/state/auth.feature';
+import { authFeature, initialAuthState } from '@app/auth/state/auth.feature';
 import { emptyDesign } from '../recipe-form/recipe-form-model';
 import { CatalogueApiActions } from '../state/catalogue-api.actions';
 import { catalogueFeature } from '../state/catalogue.feature';
@@ -44,7 +44,7 @@ describe('RecipeEditorPage', () => {
     beforeEach(async () => {
       TestBed.configureTestingModule({
         imports: [RecipeEditorPage],
-        providers: [provideRouter([]), provideStore(), provideState(recipesFeature), provideState(catalogueFeature)],
+        providers: [provideRouter([]), provideStore(), provideState(authFeature), provideState(recipesFeature), provideState(catalogueFeature)],
       });
       const store = TestBed.inject(Store);
       store.dispatch(CatalogueApiActions.catalogueLoadedSuccess({ catalogue }));
@@ -144,6 +144,7 @@ describe('RecipeEditorPage', () => {
           provideRouter([]),
           provideMockStore({
             initialState: {
+              auth: initialAuthState,
               recipes: { ...recipesFeature.reducer(undefined, { type: 'init' }), current: generateMockRecipe({ editable: false, ownerName: 'Jonah Weiss' }) },
               catalogue: catalogueFeature.reducer(undefined, { type: 'init' }),
             },
