@@ -35,6 +35,9 @@ export async function newPage(browser: Browser, baseURL: string, viewport = { wi
 
 /** The serious and critical accessibility violations on the page as it is now (rule id and a target each). */
 export async function seriousA11yViolations(page: Page): Promise<string[]> {
+  // A Material snack bar keeps its content aria-hidden for its first 150 ms, until it has been
+  // announced; check the page as it settles, not in that moment.
+  await page.waitForFunction(() => !document.querySelector('mat-snack-bar-container [aria-hidden="true"] button'));
   const results = await new AxeBuilder({ page }).analyze();
   return results.violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
