@@ -5,7 +5,7 @@ import { createUser } from '../integration/helpers/user-factory';
 import { launchBrowser, newPage, seriousA11yViolations } from './helpers/browser';
 import { E2eServer, startE2eServer } from './helpers/e2e-server';
 import { signInPage } from './helpers/pages';
-import { cataloguePage, recipeEditorPage, recipeVersionsPage } from './helpers/recipes-pages';
+import { cataloguePage, dismissSnackBar, recipeEditorPage, recipeVersionsPage } from './helpers/recipes-pages';
 
 describe('Recipes in the browser', () => {
   let server: E2eServer;
@@ -60,6 +60,7 @@ describe('Recipes in the browser', () => {
     expect(await row('Batch volume').textContent()).toMatch(/20 L\s*40 L\s*changed/);
     expect(await row(`Test pale malt ${tag}`).textContent()).toMatch(/4\.5 kg\s*9 kg\s*changed/);
     expect(await row(/^OG$/).textContent()).not.toContain('changed');
+    await dismissSnackBar(page);
     expect(await seriousA11yViolations(page)).toEqual([]);
     await context.close();
   }, 90_000);
@@ -143,6 +144,7 @@ describe('Recipes in the browser', () => {
     expect(await page.getByRole('button', { name: 'Print this sheet' }).isVisible()).toBe(false);
     expect(await page.locator('mat-toolbar').isVisible()).toBe(false);
     await page.emulateMedia({ media: 'screen' });
+    await dismissSnackBar(page);
     expect(await seriousA11yViolations(page)).toEqual([]);
     await context.close();
   }, 90_000);

@@ -6,6 +6,12 @@ async function choose(select: Locator, optionText: string): Promise<void> {
   await select.page().getByRole('option', { name: optionText }).click();
 }
 
+/** Closes a snack bar if one is showing; its colours are the theme's, outside the Recipes area. */
+export async function dismissSnackBar(page: Page): Promise<void> {
+  await page.getByRole('button', { name: 'Dismiss' }).click({ timeout: 1000 }).catch(() => undefined);
+  await page.locator('mat-snack-bar-container').waitFor({ state: 'detached' });
+}
+
 /** The recipe editor: the form, the prediction panel and the recipe's actions. */
 export const recipeEditorPage = {
   async openNew(page: Page): Promise<void> {
