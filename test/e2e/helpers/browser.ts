@@ -37,7 +37,14 @@ export async function newPage(browser: Browser, baseURL: string, viewport = { wi
 export async function seriousA11yViolations(page: Page): Promise<string[]> {
   // A Material snack bar keeps its content aria-hidden for its first 150 ms, until it has been
   // announced; check the page as it settles, not in that moment.
-  await page.waitForFunction(() => !document.querySelector('mat-snack-bar-container [aria-hidden="true"] button'));
+  // Likewise wait for the icon font (until it loads, an icon shows its ligature as text) and for
+  // running transitions (a half-faded element has a contrast it never keeps).
+  await page.waitForFunction(
+    () =>
+      document.fonts.status === 'loaded' &&
+      !document.querySelector('mat-snack-bar-container [aria-hidden="true"] button') &&
+      document.getAnimations().every((animation) => animation.playState !== 'running'),
+  );
   const results = await new AxeBuilder({ page }).analyze();
   return results.violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
