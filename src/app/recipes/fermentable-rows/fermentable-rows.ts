@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
 import { FormArray, ReactiveFormsModule } from '@angular/forms';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
@@ -6,7 +6,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { Fermentable, unitLabel, UnitSystem } from '@shared/recipes';
-import { FermentableGroup } from '../recipe-form/recipe-form-groups';
+import { FermentableGroup, limitIn, SI_LIMITS } from '../recipe-form/recipe-form-groups';
 
 /** The grain bill's rows: a catalogue fermentable and its amount each. */
 @Component({
@@ -23,6 +23,8 @@ export class FermentableRows {
   readonly editable = input(true);
   readonly addRequested = output<void>();
   readonly removeRequested = output<number>();
+
+  protected readonly maxAmount = computed(() => limitIn('grain-mass', SI_LIMITS.amountKg, this.unitSystem()));
 
   protected massUnit(): string {
     return unitLabel('grain-mass', this.unitSystem());

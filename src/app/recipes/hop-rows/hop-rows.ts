@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
 import { FormArray, ReactiveFormsModule } from '@angular/forms';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
@@ -6,7 +6,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { Hop, HOP_USES, HopUse, unitLabel, UnitSystem } from '@shared/recipes';
-import { HopGroup } from '../recipe-form/recipe-form-groups';
+import { HopGroup, limitIn, SI_LIMITS } from '../recipe-form/recipe-form-groups';
 
 /** The hop additions: hop, amount, time and use each. */
 @Component({
@@ -25,6 +25,7 @@ export class HopRows {
   readonly removeRequested = output<number>();
 
   protected readonly uses = HOP_USES;
+  protected readonly maxAmount = computed(() => limitIn('hop-mass', SI_LIMITS.amountGrams, this.unitSystem()));
 
   protected massUnit(): string {
     return unitLabel('hop-mass', this.unitSystem());

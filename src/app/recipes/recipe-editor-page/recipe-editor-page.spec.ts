@@ -121,6 +121,15 @@ describe('RecipeEditorPage', () => {
       expect(shown('prediction-og')).toBe(og);
     });
 
+    it('refuses at the field a batch larger than the API stores', async () => {
+      const input = element.querySelector<HTMLInputElement>('input[formcontrolname="batchVolume"]')!;
+      await type(input, '2500');
+      input.dispatchEvent(new Event('blur'));
+      await stable();
+
+      expect(element.querySelector('mat-error')?.textContent).toContain('Between 0.5 and 2000.');
+    });
+
     it('shows the message at the field and saves nothing when the batch volume is cleared', async () => {
       const store = TestBed.inject(Store);
       jest.spyOn(store, 'dispatch');

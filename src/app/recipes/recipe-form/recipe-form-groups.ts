@@ -1,5 +1,5 @@
 import { FormControl, FormGroup, NonNullableFormBuilder, Validators } from '@angular/forms';
-import { HopUse, toDisplayUnits, UnitSystem } from '@shared/recipes';
+import { HopUse, RecipeQuantity, toDisplayUnits, UnitSystem } from '@shared/recipes';
 import { RecipeFormValue } from './recipe-form-model';
 
 /** Mash temperatures the form accepts, °C; converted for a US-unit person. */
@@ -14,21 +14,29 @@ export type OtherGroup = FormGroup<{ otherId: FormControl<number | null>; amount
 /** The longest boil or hop time the science library's Tinseth utilisation accepts, min. */
 export const MAX_MINUTES = 240;
 
+/** The largest amounts the API stores, in SI units. */
+export const SI_LIMITS = { batchVolumeLitres: 2000, amountKg: 1000, amountGrams: 10000 } as const;
+
+/** An SI limit in the person's units, rounded down so the converted value stays within it. */
+export function limitIn(quantity: RecipeQuantity, siLimit: number, system: UnitSystem): number {
+  return Math.floor(toDisplayUnits(quantity, siLimit, system));
+}
+
 const positive = [Validators.required, Validators.min(0.001)];
 
 /** Builds the form's row groups with their validators. */
 export function recipeRowGroups(fb: NonNullableFormBuilder) {
   return {
-    fermentable(row: RecipeFormValue['fermentables'][number] = { fermentableId: null, amount: null }): FermentableGroup {
+    fermentable(system: UnitSystem, row: RecipeFormValue['fermentables'][number] = { fermentableId: null, amount: null }): FermentableGroup {
       return fb.group({
         fermentableId: fb.control<number | null>(row.fermentableId, Validators.required),
-        amount: fb.control<number | null>(row.amount, [...positive, Validators.max(1000)]),
+        amount: fb.control<number | null>(row.amount, [...positive, Validators.max(limitIn('grain-mass', SI_LIMITS.amountKg, system))]),
       });
     },
-    hop(row: RecipeFormValue['hops'][number] = { hopId: null, amount: null, time: 60, use: 'boil' }): HopGroup {
+    hop(system: UnitSystem, row: RecipeFormValue['hops'][number] = { hopId: null, amount: null, time: 60, use: 'boil' }): HopGroup {
       return fb.group({
         hopId: fb.control<number | null>(row.hopId, Validators.required),
-        amount: fb.control<number | null>(row.amount, [...positive, Validators.max(10000)]),
+        amount: fb.control<number | null>(row.amount, [...positive, Validators.max(limitIn('hop-mass', SI_LIMITS.amountGrams, system))]),
         time: fb.control<number | null>(row.time, [Validators.required, Validators.min(0), Validators.max(MAX_MINUTES)]),
         use: fb.control<HopUse>(row.use, Validators.required),
       });
@@ -36,9 +44,9 @@ export function recipeRowGroups(fb: NonNullableFormBuilder) {
     mashStep(row: RecipeFormValue['mashSteps'][number], system: UnitSystem): MashStepGroup {
       const [min, max] = [MASH_MIN_C, MASH_MAX_C].map((celsius) => toDisplayUnits('temperature', celsius, system));
       return fb.group({
-        name: fb.control(row.name, [Validators.required, Validators.maxLength(80)]),
+        name: fb.control(row.name, [Validators.required, Validators.maxLength(60)]),
         temperature: fb.control<number | null>(row.temperature, [Validators.required, Validators.min(min), Validators.max(max)]),
-        minutes: fb.control<number | null>(row.minutes, [Validators.required, Validators.min(1), Validators.max(600)]),
+        minutes: fb.control<number | null>(row.minutes, [Validators.required, Validators.min(1), Validators.max(300)]),
       });
     },
     other(row: RecipeFormValue['others'][number] = { otherId: null, amount: null, unit: 'g', when: '' }): OtherGroup {
@@ -46,7 +54,7 @@ export function recipeRowGroups(fb: NonNullableFormBuilder) {
         otherId: fb.control<number | null>(row.otherId, Validators.required),
         amount: fb.control<number | null>(row.amount, [...positive, Validators.max(100000)]),
         unit: fb.control(row.unit, [Validators.required, Validators.maxLength(20)]),
-        when: fb.control(row.when, Validators.maxLength(80)),
+        when: fb.control(row.when, Validators.maxLength(60)),
       });
     },
   };

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, effect, inject, input, output, untracked } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, inject, input, output, untracked } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { FormArray, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
@@ -10,7 +10,7 @@ import { FermentableRows } from '../fermentable-rows/fermentable-rows';
 import { HopRows } from '../hop-rows/hop-rows';
 import { MashStepRows } from '../mash-step-rows/mash-step-rows';
 import { OtherRows } from '../other-rows/other-rows';
-import { MAX_MINUTES, recipeRowGroups } from './recipe-form-groups';
+import { limitIn, MAX_MINUTES, recipeRowGroups, SI_LIMITS } from './recipe-form-groups';
 import { designToFormValue, formValueToDesign, RecipeFormValue } from './recipe-form-model';
 
 /** The recipe as a reactive form in the person's units; emits the design (SI) as it is typed. */
@@ -37,21 +37,22 @@ export class RecipeForm {
 
   protected readonly rows = recipeRowGroups(this.fb);
   protected readonly form = this.fb.group({
-    name: ['', [Validators.required, Validators.maxLength(120)]],
+    name: ['', [Validators.required, Validators.maxLength(100)]],
     styleId: this.fb.control<number | null>(null),
-    batchVolume: this.fb.control<number | null>(null, [Validators.required, Validators.min(0.5), Validators.max(10000)]),
+    batchVolume: this.fb.control<number | null>(null),
     mashEfficiencyPercent: this.fb.control<number | null>(null, [Validators.required, Validators.min(20), Validators.max(100)]),
     boilMinutes: this.fb.control<number | null>(null, [Validators.required, Validators.min(0), Validators.max(MAX_MINUTES)]),
     yeastId: this.fb.control<number | null>(null),
-    notes: ['', Validators.maxLength(4000)],
-    fermentables: this.fb.array([this.rows.fermentable()]),
-    hops: this.fb.array([this.rows.hop()]),
+    notes: ['', Validators.maxLength(5000)],
+    fermentables: this.fb.array([this.rows.fermentable('metric')]),
+    hops: this.fb.array([this.rows.hop('metric')]),
     mashSteps: this.fb.array([this.rows.mashStep({ name: '', temperature: null, minutes: null }, 'metric')]),
     others: this.fb.array([this.rows.other()]),
   });
   private shownSystem: UnitSystem = 'metric';
 
   protected readonly label = (quantity: Parameters<typeof unitLabel>[0]) => unitLabel(quantity, this.unitSystem());
+  protected readonly maxVolume = computed(() => limitIn('volume', SI_LIMITS.batchVolumeLitres, this.unitSystem()));
 
   constructor() {
     // The design is read untracked: it follows every keystroke, and only a new revision replaces what is typed.
@@ -68,11 +69,11 @@ export class RecipeForm {
   }
 
   protected addFermentable(): void {
-    this.form.controls.fermentables.push(this.rows.fermentable());
+    this.form.controls.fermentables.push(this.rows.fermentable(this.unitSystem()));
   }
 
   protected addHop(): void {
-    this.form.controls.hops.push(this.rows.hop());
+    this.form.controls.hops.push(this.rows.hop(this.unitSystem()));
   }
 
   protected addMashStep(): void {
@@ -97,8 +98,9 @@ export class RecipeForm {
     const source = typed ? formValueToDesign(this.form.getRawValue(), this.shownSystem) : design;
     this.shownSystem = system;
     const value = designToFormValue(source, system);
-    this.form.setControl('fermentables', this.fb.array(value.fermentables.map((row) => this.rows.fermentable(row))), { emitEvent: false });
-    this.form.setControl('hops', this.fb.array(value.hops.map((row) => this.rows.hop(row))), { emitEvent: false });
+    this.form.setControl('fermentables', this.fb.array(value.fermentables.map((row) => this.rows.fermentable(system, row))), { emitEvent: false });
+    this.form.setControl('hops', this.fb.array(value.hops.map((row) => this.rows.hop(system, row))), { emitEvent: false });
+    this.form.controls.batchVolume.setValidators([Validators.required, Validators.min(0.5), Validators.max(limitIn('volume', SI_LIMITS.batchVolumeLitres, system))]);
     this.form.setControl('mashSteps', this.fb.array(value.mashSteps.map((row) => this.rows.mashStep(row, system))), { emitEvent: false });
     this.form.setControl('others', this.fb.array(value.others.map((row) => this.rows.other(row))), { emitEvent: false });
     this.form.patchValue(value, { emitEvent: false });

@@ -15,6 +15,7 @@ import {
   unitLabel,
   UnitSystem,
 } from '@shared/recipes';
+import { limitIn, SI_LIMITS } from '../recipe-form/recipe-form-groups';
 import { shownAmount } from '../recipe-form/recipe-form-model';
 
 /** Scales the design to another batch volume or efficiency, keeping OG and IBU; shows before and after. */
@@ -35,17 +36,18 @@ export class ScalePanel {
   readonly closed = output<void>();
 
   protected readonly form = this.fb.group({
-    volume: this.fb.control<number | null>(null, [Validators.required, Validators.min(0.5), Validators.max(10000)]),
+    volume: this.fb.control<number | null>(null, [Validators.required, Validators.min(0.5)]),
     efficiency: this.fb.control<number | null>(null, [Validators.required, Validators.min(20), Validators.max(100)]),
   });
   private readonly formValue = toSignal(this.form.valueChanges, { initialValue: this.form.getRawValue() });
   protected readonly volumeUnit = computed(() => unitLabel('volume', this.unitSystem()));
+  protected readonly maxVolume = computed(() => limitIn('volume', SI_LIMITS.batchVolumeLitres, this.unitSystem()));
 
   /** The scaled design and the predictions before and after, or null while the targets are invalid. */
   protected readonly preview = computed(() => {
     const { volume, efficiency } = this.formValue();
     const design = this.design();
-    if (volume == null || efficiency == null || volume < 0.5 || efficiency < 20 || efficiency > 100) return null;
+    if (volume == null || efficiency == null || volume < 0.5 || volume > this.maxVolume() || efficiency < 20 || efficiency > 100) return null;
     const target = { batchVolumeLitres: fromDisplayUnits('volume', volume, this.unitSystem()), mashEfficiencyPercent: efficiency };
     const result = scaleRecipe(design, target, this.catalogue(), this.brewhouse());
     return {
@@ -59,9 +61,10 @@ export class ScalePanel {
     effect(() => {
       const design = this.design();
       const system = this.unitSystem();
-      untracked(() =>
-        this.form.setValue({ volume: shownAmount('volume', design.batchVolumeLitres, system), efficiency: design.mashEfficiencyPercent }),
-      );
+      untracked(() => {
+        this.form.controls.volume.setValidators([Validators.required, Validators.min(0.5), Validators.max(limitIn('volume', SI_LIMITS.batchVolumeLitres, system))]);
+        this.form.setValue({ volume: shownAmount('volume', design.batchVolumeLitres, system), efficiency: design.mashEfficiencyPercent });
+      });
     });
   }
 
