@@ -91,7 +91,8 @@ function waterPlanOf(design: RecipeDesign, bill: BillItem[], brewhouse: Brewhous
     },
     og,
   );
-  const strikeTemperatureC = strikeWaterTemperature(design.mashSteps[0].temperatureC, brewhouse.grainTemperatureC, brewhouse.mashThicknessLitresPerKg);
+  const tun = brewhouse.mashTunHeatCapacityKjPerK ? { heatCapacityKjPerK: brewhouse.mashTunHeatCapacityKjPerK, grainKilograms } : undefined;
+  const strikeTemperatureC = strikeWaterTemperature(design.mashSteps[0].temperatureC, brewhouse.grainTemperatureC, brewhouse.mashThicknessLitresPerKg, undefined, tun);
   return {
     strikeLitres: plan.strikeLitres,
     spargeLitres: plan.spargeLitres,

@@ -23,13 +23,22 @@ export const RECIPE_ENTRIES: CatalogueEntry[] = [
       opt('coolingShrinkagePercent', '%'), opt('og', 'SG')],
     returns: '{intoFermenterLitres, postBoilLitres, preBoilLitres, totalWaterLitres, strikeLitres, spargeLitres, strikeExceedsTotal, preBoilGravity}',
     call: (a) => {
-      const settings: r.BrewhouseSettings = { batchLitres: arg(a, 'batchLitres'), grainKilograms: arg(a, 'grainKilograms'), boilMinutes: arg(a, 'boilMinutes'), boilOffLitresPerHour: arg(a, 'boilOffLitresPerHour') };
+      const settings: r.VolumePlanSettings = { batchLitres: arg(a, 'batchLitres'), grainKilograms: arg(a, 'grainKilograms'), boilMinutes: arg(a, 'boilMinutes'), boilOffLitresPerHour: arg(a, 'boilOffLitresPerHour') };
       for (const key of BREWHOUSE) if (a[key] !== undefined) settings[key] = arg(a, key);
       return r.brewhouseVolumes(settings, optionalArg(a, 'og'));
     },
   },
-  e('strikeWaterTemperature', 'strike-water temperature for a target mash temperature',
-    [num('targetMash', '°C'), num('grainTemperature', '°C'), num('ratioLitresPerKg', 'L/kg'), opt('grainHeatCapacity', 'relative to water')], '°C', r.strikeWaterTemperature),
+  {
+    name: 'strikeWaterTemperature', summary: 'strike-water temperature for a target mash temperature, with the tun when its heat capacity is given',
+    parameters: [num('targetMash', '°C'), num('grainTemperature', '°C'), num('ratioLitresPerKg', 'L/kg'), opt('grainHeatCapacity', 'relative to water'),
+      opt('tunHeatCapacityKjPerK', 'kJ/K'), opt('grainKilograms', 'kg')],
+    returns: '°C',
+    call: (a) => {
+      const tunHeat = optionalArg(a, 'tunHeatCapacityKjPerK');
+      const tun = tunHeat === undefined ? undefined : { heatCapacityKjPerK: tunHeat, grainKilograms: arg(a, 'grainKilograms') };
+      return r.strikeWaterTemperature(arg(a, 'targetMash'), arg(a, 'grainTemperature'), arg(a, 'ratioLitresPerKg'), optionalArg(a, 'grainHeatCapacity'), tun);
+    },
+  },
   e('tinsethUtilisation', "Tinseth's hop utilisation", [num('boilGravity', 'SG'), num('minutes', 'min')], 'fraction', r.tinsethUtilisation),
   {
     name: 'tinsethIbu', summary: 'IBU of one hop addition by Tinseth',
@@ -47,6 +56,8 @@ export const RECIPE_ENTRIES: CatalogueEntry[] = [
     parameters: [json('malts', '[{pounds | kilograms, lovibond}]'), num('gallons', 'gal')], returns: '{mcu, srm, ebc}',
     call: (a) => r.moreyColour(jsonArg(a, 'malts'), arg(a, 'gallons')),
   },
+  e('lovibondFromEbc', 'malt colour in °L from EBC', [num('ebc', 'EBC')], '°L', r.lovibondFromEbc),
+  e('ebcFromLovibond', 'malt colour in EBC from °L', [num('lovibond', '°L')], 'EBC', r.ebcFromLovibond),
   {
     name: 'moreyColourMetric', summary: 'beer colour by Morey (litres)',
     parameters: [json('malts', '[{kilograms | pounds, lovibond}]'), num('litres', 'L')], returns: '{mcu, srm, ebc}',

@@ -26,3 +26,15 @@ export function moreyColour(malts: readonly ColourMalt[], gallons: UsGallons): B
 export function moreyColourMetric(malts: readonly ColourMalt[], litres: Litres): BeerColour {
   return moreyColour(malts, litresToUsGallons(requirePositive('litres', litres, 'L')));
 }
+
+/** Malt colour in °L from EBC: SRM = EBC ÷ 1.97, then °L = (SRM + 0.76) ÷ 1.3546. */
+export function lovibondFromEbc(ebc: number): number {
+  requireInRange('ebc', ebc, 0, 1400, 'EBC');
+  return Math.max(0, (ebc / 1.97 + 0.76) / 1.3546);
+}
+
+/** Malt colour in EBC from °L: SRM = 1.3546 × °L − 0.76, then EBC = 1.97 × SRM (never below 0). */
+export function ebcFromLovibond(lovibond: number): number {
+  requireInRange('lovibond', lovibond, 0, 700, '°L');
+  return Math.max(0, 1.97 * (1.3546 * lovibond - 0.76));
+}

@@ -21,11 +21,15 @@ export { bitternessRatio } from './bitterness';
 export { moreyColour } from './colour';
 /** Beer colour by Morey with the batch volume in litres (malt masses in kilograms or pounds). */
 export { moreyColourMetric } from './colour';
+/** Malt colour in °L from EBC. */
+export { lovibondFromEbc } from './colour';
+/** Malt colour in EBC from °L. */
+export { ebcFromLovibond } from './colour';
 /** Yeast cells to pitch, in billions: rate × mL × °P (rate in million cells/mL/°P). */
 export { yeastCellsToPitch } from './yeast-pitch';
 export type { MetricFermentable, UsFermentable } from './original-gravity';
-export type { BrewhouseSettings, VolumePlan } from './water-volumes';
-export { GRAIN_HEAT_CAPACITY_RATIO } from './strike-temperature';
+export type { VolumePlanSettings, VolumePlan } from './water-volumes';
+export { GRAIN_HEAT_CAPACITY_RATIO, WATER_SPECIFIC_HEAT_KJ_PER_KG_K, type MashTun } from './strike-temperature';
 export type { HopAddition } from './bitterness';
 export type { ColourMalt, BeerColour } from './colour';
 export { PITCH_RATES } from './yeast-pitch';

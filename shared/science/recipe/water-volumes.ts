@@ -2,7 +2,7 @@ import { requireInRange } from '../units/range-guard';
 import type { Kilograms, Litres, SpecificGravity } from '../units/unit-types';
 
 /** The brewhouse settings and batch a volume plan is made from (litres, kilograms, minutes). */
-export interface BrewhouseSettings {
+export interface VolumePlanSettings {
   batchLitres: Litres;
   grainKilograms: Kilograms;
   boilMinutes: number;
@@ -31,7 +31,7 @@ export interface VolumePlan {
 }
 
 /** Strike, sparge, pre-boil and total water from brewhouse settings (batch-sparge style bookkeeping). */
-export function brewhouseVolumes(settings: BrewhouseSettings, og?: SpecificGravity): VolumePlan {
+export function brewhouseVolumes(settings: VolumePlanSettings, og?: SpecificGravity): VolumePlan {
   const s = { grainAbsorptionLitresPerKg: 1, kettleLossLitres: 0, fermenterLossLitres: 0, mashRatioLitresPerKg: 3, coolingShrinkagePercent: 4, ...settings };
   requireInRange('batchLitres', s.batchLitres, 0.1, 1e5, 'L');
   requireInRange('grainKilograms', s.grainKilograms, 0, 1e5, 'kg');
