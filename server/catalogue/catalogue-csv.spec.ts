@@ -1,4 +1,5 @@
 import { parseCatalogueCsv } from './catalogue-csv';
+import { CATALOGUE_CSV_COLUMNS } from '@shared/recipes';
 import { CATALOGUE_KINDS } from './catalogue-kinds';
 
 describe('parseCatalogueCsv', () => {
@@ -33,5 +34,9 @@ describe('parseCatalogueCsv', () => {
     const result = parseCatalogueCsv(hops, 'name,alphaAcidPercent,form\n"unterminated,5,pellet');
     expect(result.rows).toEqual([]);
     expect(result.problems[0].reason).toContain('not valid CSV');
+  });
+
+  it.each(Object.values(CATALOGUE_KINDS).map((spec) => [spec.kind, spec] as const))('when the %s columns are compared, then the stored fields are exactly the shared CSV columns', (_kind, spec) => {
+    expect(Object.keys(spec.columns)).toEqual([...CATALOGUE_CSV_COLUMNS[spec.kind]]);
   });
 });

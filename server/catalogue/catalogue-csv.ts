@@ -1,5 +1,5 @@
 import { parse } from 'csv-parse/sync';
-import { CatalogueImportProblem } from '@shared/recipes';
+import { CATALOGUE_CSV_COLUMNS, CatalogueImportProblem } from '@shared/recipes';
 import { CatalogueKind } from './catalogue-kinds';
 
 /** Rows of a catalogue CSV that passed validation, with the line of the file each came from. */
@@ -32,7 +32,7 @@ function readRecords(csv: string): { records: { record: Record<string, string>; 
 export function parseCatalogueCsv(spec: CatalogueKind, csv: string): ParsedCatalogueCsv {
   const read = readRecords(csv);
   if ('reason' in read) return { rows: [], problems: [read] };
-  const expected = Object.keys(spec.columns);
+  const expected = [...CATALOGUE_CSV_COLUMNS[spec.kind]];
   const missing = expected.filter((field) => !read.header.includes(field));
   const unknown = read.header.filter((field) => !expected.includes(field));
   if (missing.length || unknown.length) {

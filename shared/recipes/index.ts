@@ -10,3 +10,4 @@ export * from './recipe-prediction';
 export * from './recipe-units';
 export * from './scale-recipe';
 export * from './recipe-test-data';
+export * from './catalogue-csv-columns';

@@ -25,7 +25,7 @@ export function entryFormGroups(fb: NonNullableFormBuilder) {
     }),
     hops: fb.group({
       name: fb.control('', [Validators.required, Validators.maxLength(100)]),
-      alphaAcidPercent: fb.control<number | null>(null, [Validators.required, Validators.min(0), Validators.max(30)]),
+      alphaAcidPercent: fb.control<number | null>(null, [Validators.required, Validators.min(0), Validators.max(100)]),
       form: fb.control<HopForm>('pellet', Validators.required),
     }),
     yeasts: fb.group(

@@ -12,13 +12,14 @@ import {
   OTHER_ADDITION_KINDS,
 } from '@shared/recipes';
 import { CatalogueEntry, CatalogueEntryInput } from '../catalogue-entry';
+import { EbcPipe } from '../ebc-pipe';
 import { KIND_LABELS } from '../catalogue-columns';
 import { entryFormGroups, entryInputOf } from './catalogue-entry-form-groups';
 
 /** Adds or changes one catalogue entry; the fields follow the kind. */
 @Component({
   selector: 'cw-catalogue-entry-form',
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatButton],
+  imports: [ReactiveFormsModule, EbcPipe, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatButton],
   templateUrl: './catalogue-entry-form.html',
   styleUrl: './catalogue-entry-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { Fermentable, Hop, IngredientKind, OtherAddition, Yeast } from '@shared/recipes';
+import { ebcFromLovibond } from '@shared/science';
 import { CatalogueEntry } from '../catalogue-entry';
 import { KIND_LABELS } from '../catalogue-columns';
 
@@ -43,7 +44,7 @@ const COLUMNS: Record<IngredientKind, Column[]> = {
   fermentables: [
     { heading: 'Kind', text: (e) => (e as Fermentable).kind },
     { heading: 'Extract', text: (e) => `${(e as Fermentable).extractPercent} %` },
-    { heading: 'Colour', text: (e) => `${(e as Fermentable).colourLovibond} °L` },
+    { heading: 'Colour', text: (e) => `${(e as Fermentable).colourLovibond} °L (${Math.round(ebcFromLovibond((e as Fermentable).colourLovibond))} EBC)` },
     { heading: 'Usual max share', text: (e) => ((e as Fermentable).maxSharePercent === null ? 'no limit' : `${(e as Fermentable).maxSharePercent} %`) },
   ],
   hops: [

@@ -12,7 +12,7 @@ export type MashStepGroup = FormGroup<{ name: FormControl<string>; temperature: 
 export type OtherGroup = FormGroup<{ otherId: FormControl<number | null>; amount: FormControl<number | null>; unit: FormControl<string>; when: FormControl<string> }>;
 
 /** The longest boil or hop time the science library's Tinseth utilisation accepts, min. */
-export const MAX_MINUTES = 240;
+export const MAX_MINUTES = 300;
 
 /** The largest amounts the API stores, in SI units. */
 export const SI_LIMITS = { batchVolumeLitres: 2000, amountKg: 1000, amountGrams: 10000 } as const;
