@@ -35,16 +35,18 @@ export async function newPage(browser: Browser, baseURL: string, viewport = { wi
 
 /** The serious and critical accessibility violations on the page as it is now (rule id and a target each). */
 export async function seriousA11yViolations(page: Page): Promise<string[]> {
-  // A Material snack bar keeps its content aria-hidden for its first 150 ms, until it has been
-  // announced; check the page as it settles, not in that moment.
-  // Likewise wait for the icon font (until it loads, an icon shows its ligature as text) and for
-  // running transitions (a half-faded element has a contrast it never keeps).
+  // Check the page as it settles, not mid-change: rendered (every page has an h1), the icon font
+  // loaded (until then an icon shows its ligature as text), a snack bar past its first 150 ms (its
+  // content stays aria-hidden until announced) and no transition running (a half-faded element has
+  // a contrast it never keeps).
   await page.waitForFunction(
     () =>
+      document.querySelector('h1') !== null &&
       document.fonts.status === 'loaded' &&
       !document.querySelector('mat-snack-bar-container [aria-hidden="true"] button') &&
       document.getAnimations().every((animation) => animation.playState !== 'running'),
   );
+  await page.evaluate(() => new Promise((resolve) => requestAnimationFrame(() => requestAnimationFrame(resolve))));
   const results = await new AxeBuilder({ page }).analyze();
   return results.violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
