@@ -1,26 +1,14 @@
-import { Browser } from 'playwright-core';
 import { createUser } from '../integration/helpers/user-factory';
-import { launchBrowser, newPage, seriousA11yViolations } from './helpers/browser';
-import { startE2eServer, E2eServer } from './helpers/e2e-server';
+import { newPage, seriousA11yViolations } from './helpers/browser';
+import { useE2eEnvironment } from './helpers/e2e-environment';
 import { acceptInvitationPage, membersPage, shell, signInPage } from './helpers/pages';
 
 describe('Foundation in the browser', () => {
-  let server: E2eServer;
-  let browser: Browser;
-  let closeBrowser: () => Promise<void>;
-
-  beforeAll(async () => {
-    server = await startE2eServer();
-    ({ browser, close: closeBrowser } = await launchBrowser());
-  });
-  afterAll(async () => {
-    await closeBrowser?.();
-    await server?.stop();
-  });
+  const env = useE2eEnvironment();
 
   it('when a member signs in on the real page, then Today greets them and no page has a serious accessibility violation', async () => {
-    const member = await createUser(server.db, ['member'], { name: 'Rowan Member' });
-    const { context, page } = await newPage(browser, server.baseUrl);
+    const member = await createUser(env.server.db, ['member'], { name: 'Rowan Member' });
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
     await page.goto('/sign-in');
     expect(await seriousA11yViolations(page)).toEqual([]);
     await signInPage.signIn(page, member.email, member.password);
@@ -32,8 +20,8 @@ describe('Foundation in the browser', () => {
   });
 
   it('when a member opens the Members page, then they are refused and the member list is not shown', async () => {
-    const member = await createUser(server.db, ['member']);
-    const { context, page } = await newPage(browser, server.baseUrl);
+    const member = await createUser(env.server.db, ['member']);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
     await signInPage.signIn(page, member.email, member.password);
     await page.waitForURL(/\/today/);
     await page.goto('/members');
@@ -44,8 +32,8 @@ describe('Foundation in the browser', () => {
   });
 
   it('when a wrong password is typed, then the page says so and stays on sign-in', async () => {
-    const member = await createUser(server.db, ['member']);
-    const { context, page } = await newPage(browser, server.baseUrl);
+    const member = await createUser(env.server.db, ['member']);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
     await signInPage.signIn(page, member.email, 'definitely wrong');
     await page.getByText('do not match').waitFor();
     expect(page.url()).toContain('/sign-in');
@@ -53,15 +41,15 @@ describe('Foundation in the browser', () => {
   });
 
   it('when an admin invites a person, then the person accepts, lands on Today, and can sign in again', async () => {
-    const admin = await createUser(server.db, ['member', 'admin'], { name: 'Officer Test' });
+    const admin = await createUser(env.server.db, ['member', 'admin'], { name: 'Officer Test' });
     const email = `invitee-${Date.now()}@test.example`;
-    const officer = await newPage(browser, server.baseUrl);
+    const officer = await newPage(env.browser, env.server.baseUrl);
     await signInPage.signIn(officer.page, admin.email, admin.password);
     await officer.page.waitForURL(/\/today/);
     const link = await membersPage.invite(officer.page, email);
     expect(await seriousA11yViolations(officer.page)).toEqual([]);
 
-    const guest = await newPage(browser, server.baseUrl);
+    const guest = await newPage(env.browser, env.server.baseUrl);
     await acceptInvitationPage.accept(guest.page, link, 'Juniper Invitee', 'a long enough password');
     await guest.page.waitForURL(/\/today/);
     expect(await shell.heading(guest.page)).toContain('Today');
@@ -73,8 +61,8 @@ describe('Foundation in the browser', () => {
   });
 
   it('when a member uses a 375 px wide phone screen, then sign-in and Today work and the navigation opens', async () => {
-    const member = await createUser(server.db, ['member']);
-    const { context, page } = await newPage(browser, server.baseUrl, { width: 375, height: 740 });
+    const member = await createUser(env.server.db, ['member']);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl, { width: 375, height: 740 });
     await signInPage.signIn(page, member.email, member.password);
     await page.waitForURL(/\/today/);
     expect(await seriousA11yViolations(page)).toEqual([]);

@@ -1,30 +1,18 @@
 import { randomUUID } from 'node:crypto';
-import { Browser } from 'playwright-core';
 import { createCatalogueEntries } from '../integration/helpers/catalogue-factory';
 import { createUser } from '../integration/helpers/user-factory';
-import { launchBrowser, newPage, seriousA11yViolations } from './helpers/browser';
-import { E2eServer, startE2eServer } from './helpers/e2e-server';
+import { newPage, seriousA11yViolations } from './helpers/browser';
+import { useE2eEnvironment } from './helpers/e2e-environment';
 import { signInPage } from './helpers/pages';
 import { cataloguePage, dismissSnackBar, recipeEditorPage, recipeVersionsPage } from './helpers/recipes-pages';
 
 describe('Recipes in the browser', () => {
-  let server: E2eServer;
-  let browser: Browser;
-  let closeBrowser: () => Promise<void>;
-
-  beforeAll(async () => {
-    server = await startE2eServer();
-    ({ browser, close: closeBrowser } = await launchBrowser());
-  });
-  afterAll(async () => {
-    await closeBrowser?.();
-    await server?.stop();
-  });
+  const env = useE2eEnvironment();
 
   it('when a member builds a recipe from the catalogue, adds a hop, saves, scales and compares, then predictions follow and the versions differ', async () => {
-    const member = await createUser(server.db, ['member'], { name: 'Rowan Recipe' });
-    const { tag } = await createCatalogueEntries(server.db);
-    const { context, page } = await newPage(browser, server.baseUrl);
+    const member = await createUser(env.server.db, ['member'], { name: 'Rowan Recipe' });
+    const { tag } = await createCatalogueEntries(env.server.db);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
     await signInPage.signIn(page, member.email, member.password);
     await page.waitForURL(/\/today/);
 
@@ -66,9 +54,9 @@ describe('Recipes in the browser', () => {
   }, 90_000);
 
   it('when a brewer imports a CSV of hops with a bad row, then each problem is shown by line and nothing is imported until the file is fixed', async () => {
-    const brewer = await createUser(server.db, ['member', 'brewer']);
+    const brewer = await createUser(env.server.db, ['member', 'brewer']);
     const tag = randomUUID().slice(0, 8);
-    const { context, page } = await newPage(browser, server.baseUrl);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
     await signInPage.signIn(page, brewer.email, brewer.password);
     await page.waitForURL(/\/today/);
     await cataloguePage.open(page, 'Hops');
@@ -79,22 +67,22 @@ describe('Recipes in the browser', () => {
     expect(problems.length).toBeGreaterThan(0);
     expect(problems.every((problem) => problem.startsWith('Line 3:'))).toBe(true);
     expect(await page.getByRole('button', { name: /^Import \d+ hops$/ }).isDisabled()).toBe(true);
-    expect(await server.db('hops').where('name', 'like', `%${tag}`).count({ n: '*' })).toEqual([{ n: 0 }]);
+    expect(await env.server.db('hops').where('name', 'like', `%${tag}`).count({ n: '*' })).toEqual([{ n: 0 }]);
     expect(await seriousA11yViolations(page)).toEqual([]);
 
     await page.getByRole('button', { name: 'Discard' }).click();
     await cataloguePage.chooseCsv(page, 'CSV file of hops', `name,alphaAcidPercent,form\nCsv hop A ${tag},5.5,pellet\nCsv hop B ${tag},7,whole\n`);
     await page.getByRole('button', { name: 'Import 2 hops' }).click();
     await page.getByRole('rowheader', { name: `Csv hop B ${tag}` }).waitFor();
-    expect(await server.db('hops').where('name', 'like', `%${tag}`).count({ n: '*' })).toEqual([{ n: 2 }]);
+    expect(await env.server.db('hops').where('name', 'like', `%${tag}`).count({ n: '*' })).toEqual([{ n: 2 }]);
     await context.close();
   }, 90_000);
 
   it('when a member opens a recipe another member shared with the co-op, then they can view and clone it but not edit it', async () => {
-    const owner = await createUser(server.db, ['member'], { name: 'Owner Member' });
-    const other = await createUser(server.db, ['member'], { name: 'Other Member' });
-    const ids = await createCatalogueEntries(server.db);
-    const { context, page } = await newPage(browser, server.baseUrl);
+    const owner = await createUser(env.server.db, ['member'], { name: 'Owner Member' });
+    const other = await createUser(env.server.db, ['member'], { name: 'Other Member' });
+    const ids = await createCatalogueEntries(env.server.db);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
     await signInPage.signIn(page, owner.email, owner.password);
     await page.waitForURL(/\/today/);
     await recipeEditorPage.openNew(page);
@@ -106,7 +94,7 @@ describe('Recipes in the browser', () => {
     const url = page.url();
     await context.close();
 
-    const second = await newPage(browser, server.baseUrl);
+    const second = await newPage(env.browser, env.server.baseUrl);
     await signInPage.signIn(second.page, other.email, other.password);
     await second.page.waitForURL(/\/today/);
     await second.page.goto(new URL(url).pathname);
@@ -120,9 +108,9 @@ describe('Recipes in the browser', () => {
   }, 90_000);
 
   it('when a member uses a 375 px wide phone, then the predictions sit below the form and the brew-day sheet carries its cautions', async () => {
-    const member = await createUser(server.db, ['member']);
-    const ids = await createCatalogueEntries(server.db);
-    const { context, page } = await newPage(browser, server.baseUrl, { width: 375, height: 740 });
+    const member = await createUser(env.server.db, ['member']);
+    const ids = await createCatalogueEntries(env.server.db);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl, { width: 375, height: 740 });
     await signInPage.signIn(page, member.email, member.password);
     await page.waitForURL(/\/today/);
     await recipeEditorPage.openNew(page);
