@@ -15,6 +15,7 @@ import {
   csrfProtection,
   SignInThrottleLimits,
 } from './auth';
+import { PublicRequestLimit } from './auth/public-request-limit';
 import { createClientRouter } from './client/serve-client';
 import { Config } from './config';
 import { apiNotFound, errorMiddleware } from './errors/error-middleware';
@@ -35,6 +36,8 @@ export interface AppDeps {
   config: Config;
   db: Knex;
   signInLimits?: SignInThrottleLimits;
+  /** Cap on anonymous password-reset requests per address. */
+  publicRequestLimit?: PublicRequestLimit;
   /** Interval of the expired-session sweep; 0 turns it off (tests). */
   sessionCleanupMs?: number;
 }
@@ -64,7 +67,7 @@ const contentSecurityPolicy = {
 };
 
 /** Builds the Express app: API routers under /api, the built client, one error handler last. */
-export function createApp({ config, db, signInLimits, sessionCleanupMs = 15 * 60 * 1000 }: AppDeps): CreatedApp {
+export function createApp({ config, db, signInLimits, publicRequestLimit, sessionCleanupMs = 15 * 60 * 1000 }: AppDeps): CreatedApp {
   const app = express();
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
@@ -99,7 +102,7 @@ export function createApp({ config, db, signInLimits, sessionCleanupMs = 15 * 60
   app.use('/api', sessions.middleware, passport.session(), csrfProtection);
   mountApi(app, '/api/auth', createAuthRouter({ auth, passport, throttle: createSignInThrottle(signInLimits) }));
   mountApi(app, '/api/invitations', createInvitationsRouter(invitations));
-  mountApi(app, '/api/password-resets', createPasswordResetsRouter(resets));
+  mountApi(app, '/api/password-resets', createPasswordResetsRouter(resets, publicRequestLimit));
   mountApi(app, '/api/members', createMembersRouter(createMembersService(db, invitations), resets));
   mountApi(app, '/api/preferences', createPreferencesRouter(db));
   mountApi(app, '/api/ingredients', createCatalogueRouter(createCatalogueService(db)));

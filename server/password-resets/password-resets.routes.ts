@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { emailField, newPasswordField } from '../auth/auth.schemas';
+import { createPublicRequestLimit, PublicRequestLimit } from '../auth/public-request-limit';
 import { publicRoute } from '../auth/route-access';
 import { parseRequest } from '../http/parse-request';
 import { PasswordResetsService } from './password-resets.service';
@@ -12,16 +13,17 @@ const completeSchema = z.object({
 });
 
 /** /api/password-resets: public, by design; the answers never reveal whether an e-mail is known. */
-export function createPasswordResetsRouter(resets: PasswordResetsService): Router {
+export function createPasswordResetsRouter(resets: PasswordResetsService, limit?: PublicRequestLimit): Router {
   const router = Router();
+  const perAddress = createPublicRequestLimit(limit);
 
-  router.post('/requests', publicRoute, async (req, res) => {
+  router.post('/requests', publicRoute, perAddress, async (req, res) => {
     const { email } = parseRequest(requestSchema, req.body);
     await resets.request(email);
     res.status(202).end();
   });
 
-  router.post('/', publicRoute, async (req, res) => {
+  router.post('/', publicRoute, perAddress, async (req, res) => {
     const { token, password } = parseRequest(completeSchema, req.body);
     await resets.complete(token, password);
     res.status(204).end();

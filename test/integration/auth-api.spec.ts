@@ -100,4 +100,14 @@ describe('Sign-in API', () => {
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ status: 'ok', database: 'up' });
   });
+
+  it('when one address asks for password resets past the limit, then it answers 429 with a retry time', async () => {
+    const limited = createTestApp({ db: t.db, publicRequestLimit: { points: 2, windowSeconds: 600 } });
+    const guest = await ApiClient.anonymous(limited.app);
+    for (let i = 0; i < 2; i++) expect((await guest.send('post', '/api/password-resets/requests', { email: 'someone@test.example' })).status).toBe(202);
+    const refused = await guest.send('post', '/api/password-resets/requests', { email: 'someone@test.example' });
+    expect(refused.status).toBe(429);
+    expect(refused.body.error.retryAfterSeconds).toBeGreaterThan(0);
+    limited.close();
+  });
 });

@@ -3,6 +3,7 @@ import { createApp, CreatedApp } from '@server/app';
 import { Config, loadConfig } from '@server/config';
 import { createDb } from '@server/db';
 import { SignInThrottleLimits } from '@server/auth';
+import { PublicRequestLimit } from '@server/auth/public-request-limit';
 
 /** Configuration of the test database prepared by `npm test`; a clear error when run some other way. */
 export function testConfig(): Config {
@@ -18,9 +19,9 @@ export interface TestApp extends CreatedApp {
   config: Config;
 }
 
-export function createTestApp(options: { db?: Knex; signInLimits?: SignInThrottleLimits } = {}): TestApp {
+export function createTestApp(options: { db?: Knex; signInLimits?: SignInThrottleLimits; publicRequestLimit?: PublicRequestLimit } = {}): TestApp {
   const config = testConfig();
   const db = options.db ?? createDb(config.db);
-  const created = createApp({ config, db, signInLimits: options.signInLimits, sessionCleanupMs: 0 });
+  const created = createApp({ config, db, signInLimits: options.signInLimits, publicRequestLimit: options.publicRequestLimit, sessionCleanupMs: 0 });
   return { ...created, db, config };
 }
