@@ -6,11 +6,12 @@ import { MatInput } from '@angular/material/input';
 import { AcceptInvitationRequest, PASSWORD_MIN_LENGTH } from '@shared/auth';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
 import { confirmPasswordValidator } from '../confirm-password-validator';
+import { NewPasswordFields } from '../new-password-fields/new-password-fields';
 
 /** The invited person's name and a password, typed twice. */
 @Component({
   selector: 'cw-accept-invitation-form',
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatError, MatInput, MatButton],
+  imports: [ReactiveFormsModule, NewPasswordFields, MatFormField, MatLabel, MatHint, MatError, MatInput, MatButton],
   templateUrl: './accept-invitation-form.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -20,9 +21,8 @@ export class AcceptInvitationForm {
   readonly fieldErrors = input<FieldErrors | null>(null);
   readonly submitted = output<AcceptInvitationRequest>();
 
-  protected readonly minLength = PASSWORD_MIN_LENGTH;
   protected readonly form = inject(NonNullableFormBuilder).group({
-    name: ['', [Validators.required, Validators.maxLength(120)]],
+    name: ['', [Validators.required, Validators.maxLength(100)]],
     password: ['', [Validators.required, Validators.minLength(PASSWORD_MIN_LENGTH)]],
     confirm: ['', [Validators.required, confirmPasswordValidator]],
   });

@@ -24,8 +24,10 @@ describe('AcceptInvitationPage', () => {
     return fixture.nativeElement as HTMLElement;
   }
 
-  function type(element: HTMLElement, control: string, value: string): void {
-    const input = element.querySelector<HTMLInputElement>(`input[formcontrolname="${control}"]`)!;
+  /** Types into the field whose label reads `label`, as a person would find it. */
+  function type(element: HTMLElement, label: string, value: string): void {
+    const field = [...element.querySelectorAll('mat-form-field')].find((f) => f.querySelector('mat-label')?.textContent?.trim() === label)!;
+    const input = field.querySelector<HTMLInputElement>('input')!;
     input.value = value;
     input.dispatchEvent(new Event('input'));
   }
@@ -49,9 +51,9 @@ describe('AcceptInvitationPage', () => {
 
   it('dispatches Submitted with name and password when both passwords match', async () => {
     const element = await render({ invitation, invitationStatus: 'ready' });
-    type(element, 'name', ' Priya Raman ');
-    type(element, 'password', 'a long pass phrase');
-    type(element, 'confirm', 'a long pass phrase');
+    type(element, 'Your name', ' Priya Raman ');
+    type(element, 'Password', 'a long pass phrase');
+    type(element, 'Confirm password', 'a long pass phrase');
 
     joinButton(element).click();
     await fixture.whenStable();
@@ -63,9 +65,9 @@ describe('AcceptInvitationPage', () => {
 
   it('shows a mismatch at the confirm field and dispatches nothing when the passwords differ', async () => {
     const element = await render({ invitation, invitationStatus: 'ready' });
-    type(element, 'name', 'Priya Raman');
-    type(element, 'password', 'a long pass phrase');
-    type(element, 'confirm', 'another pass phrase');
+    type(element, 'Your name', 'Priya Raman');
+    type(element, 'Password', 'a long pass phrase');
+    type(element, 'Confirm password', 'another pass phrase');
 
     joinButton(element).click();
     await fixture.whenStable();

@@ -1,15 +1,14 @@
 import { ChangeDetectionStrategy, Component, inject, input, output } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
-import { MatInput } from '@angular/material/input';
 import { PASSWORD_MIN_LENGTH } from '@shared/auth';
 import { confirmPasswordValidator } from '../confirm-password-validator';
+import { NewPasswordFields } from '../new-password-fields/new-password-fields';
 
 /** A new password, typed twice. */
 @Component({
   selector: 'cw-reset-password-form',
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatError, MatInput, MatButton],
+  imports: [ReactiveFormsModule, NewPasswordFields, MatButton],
   templateUrl: './reset-password-form.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -18,7 +17,6 @@ export class ResetPasswordForm {
   readonly error = input<string | null>(null);
   readonly submitted = output<string>();
 
-  protected readonly minLength = PASSWORD_MIN_LENGTH;
   protected readonly form = inject(NonNullableFormBuilder).group({
     password: ['', [Validators.required, Validators.minLength(PASSWORD_MIN_LENGTH)]],
     confirm: ['', [Validators.required, confirmPasswordValidator]],
