@@ -2,6 +2,7 @@ import knex, { Knex } from 'knex';
 import { join } from 'node:path';
 import { Config } from './config';
 import { Role } from '@shared/auth';
+import { KitKind, KitState } from '@shared/kit';
 import { RecipeDesign } from '@shared/recipes';
 
 export interface UserRow {
@@ -74,6 +75,20 @@ export interface RecipeVersionRow {
   created_at: Date;
 }
 
+export interface KitItemRow {
+  id: number;
+  code: string;
+  name: string;
+  kind: KitKind;
+  /** DECIMAL: the driver returns a string. */
+  capacity_litres: string | null;
+  state: KitState;
+  turnaround_hours: number;
+  notes: string;
+  created_at: Date;
+  updated_at: Date;
+}
+
 declare module 'knex/types/tables' {
   interface Tables {
     users: Knex.CompositeTableType<UserRow, Omit<UserRow, 'id' | 'created_at' | 'updated_at' | 'password_reset_requested_at' | 'unit_system'>, Partial<UserRow>>;
@@ -82,6 +97,7 @@ declare module 'knex/types/tables' {
     password_resets: Knex.CompositeTableType<PasswordResetRow, Omit<PasswordResetRow, 'id' | 'created_at' | 'used_at'>, Partial<PasswordResetRow>>;
     recipes: Knex.CompositeTableType<RecipeRow, Omit<RecipeRow, 'id' | 'created_at' | 'updated_at' | 'archived_at' | 'current_version'> & { current_version?: number }, Partial<RecipeRow>>;
     recipe_versions: Knex.CompositeTableType<RecipeVersionRow, Omit<RecipeVersionRow, 'id' | 'created_at' | 'design'> & { design: string }>;
+    kit_items: Knex.CompositeTableType<KitItemRow, Omit<KitItemRow, 'id' | 'created_at' | 'updated_at' | 'state' | 'notes' | 'capacity_litres'> & { state?: KitState; notes?: string; capacity_litres: number | null }, Partial<Omit<KitItemRow, 'capacity_litres'>> & { capacity_litres?: number | null }>;
     audit_log: Knex.CompositeTableType<AuditLogRow, Omit<AuditLogRow, 'id' | 'created_at' | 'detail'> & { detail: string | null }>;
   }
 }
