@@ -100,7 +100,7 @@ export function createApp({ config, db, signInLimits, publicRequestLimit, sessio
 
   mountApi(app, '/api/health', createHealthRouter(db));
   app.use('/api', sessions.middleware, passport.session(), csrfProtection);
-  mountApi(app, '/api/auth', createAuthRouter({ auth, passport, throttle: createSignInThrottle(signInLimits) }));
+  mountApi(app, '/api/auth', createAuthRouter({ auth, passport, throttle: createSignInThrottle(signInLimits), coopTimeZone: config.coopTimeZone }));
   mountApi(app, '/api/invitations', createInvitationsRouter(invitations));
   mountApi(app, '/api/password-resets', createPasswordResetsRouter(resets, publicRequestLimit));
   mountApi(app, '/api/members', createMembersRouter(createMembersService(db, invitations), resets));

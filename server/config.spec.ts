@@ -15,4 +15,9 @@ describe('loadConfig', () => {
   it('when PUBLIC_URL ends in a slash, then links are built without a double slash', () => {
     expect(loadConfig({ ...minimal, PUBLIC_URL: 'https://brew.example/' }).publicUrl).toBe('https://brew.example');
   });
+
+  it('when COOP_TIME_ZONE is not an IANA zone, then it is refused; a valid one is kept', () => {
+    expect(() => loadConfig({ ...minimal, COOP_TIME_ZONE: 'Mars/Olympus' })).toThrow(/COOP_TIME_ZONE/);
+    expect(loadConfig({ ...minimal, COOP_TIME_ZONE: 'Europe/Dublin' }).coopTimeZone).toBe('Europe/Dublin');
+  });
 });

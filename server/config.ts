@@ -1,3 +1,4 @@
+import { IANAZone } from 'luxon';
 import { z } from 'zod';
 
 const booleanFlag = z
@@ -20,6 +21,10 @@ const configSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   TRUST_PROXY: booleanFlag,
   CLIENT_DIST: z.string().default('dist/commonwort/browser'),
+  COOP_TIME_ZONE: z
+    .string()
+    .default('Europe/Berlin')
+    .refine((zone) => IANAZone.isValidZone(zone), 'an IANA time zone such as Europe/Berlin'),
 });
 
 /** The server's settings, validated once at start-up. */
@@ -34,6 +39,8 @@ export interface Config {
   logLevel: string;
   trustProxy: boolean;
   clientDist: string;
+  /** Wall-clock zone of the co-op: bookings, brew days and readings are entered and shown in it. */
+  coopTimeZone: string;
 }
 
 /** Reads the configuration from environment variables; throws naming every bad variable. */
@@ -55,5 +62,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     logLevel: e.LOG_LEVEL,
     trustProxy: e.TRUST_PROXY,
     clientDist: e.CLIENT_DIST,
+    coopTimeZone: e.COOP_TIME_ZONE,
   };
 }

@@ -1,5 +1,5 @@
 import { Request, Response, Router } from 'express';
-import { SessionResponse, SessionUser } from '@shared/auth';
+import { SessionProbeResponse, SessionResponse, SessionUser } from '@shared/auth';
 import { AppError } from '../errors/app-error';
 import { parseRequest } from '../http/parse-request';
 import { AuthService } from './auth.service';
@@ -29,11 +29,11 @@ export function logIn(req: Request, res: Response, user: SessionUser): Promise<v
 }
 
 /** /api/auth: the session probe, sign-in and sign-out. */
-export function createAuthRouter(deps: { auth: AuthService; passport: AppPassport; throttle: SignInThrottle }): Router {
+export function createAuthRouter(deps: { auth: AuthService; passport: AppPassport; throttle: SignInThrottle; coopTimeZone: string }): Router {
   const router = Router();
 
   router.get('/session', publicRoute, (req, res) => {
-    const body: SessionResponse = { user: req.user ?? null };
+    const body: SessionProbeResponse = { user: req.user ?? null, coopTimeZone: deps.coopTimeZone };
     res.json(body);
   });
 

@@ -19,6 +19,11 @@ export interface SessionResponse {
   user: SessionUser | null;
 }
 
+/** GET /api/auth/session: also carries the co-op's time zone, in which the client shows dates. */
+export interface SessionProbeResponse extends SessionResponse {
+  coopTimeZone: string;
+}
+
 /** GET /api/invitations/:token (public): what the invited person sees before accepting. */
 export interface InvitationPreview {
   email: string;

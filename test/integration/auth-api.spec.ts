@@ -82,6 +82,11 @@ describe('Sign-in API', () => {
     expect((await client.get('/api/auth/session')).body.user).toBeNull();
   });
 
+  it('when anyone probes the session, then the co-op time zone comes with it', async () => {
+    const res = await request(t.app).get('/api/auth/session');
+    expect(res.body.coopTimeZone).toBe(t.config.coopTimeZone);
+  });
+
   it('when the server process is replaced, then a signed-in session still works', async () => {
     const user = await createUser(t.db);
     const client = await ApiClient.signedIn(t.app, user);

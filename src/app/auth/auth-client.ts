@@ -8,6 +8,7 @@ import {
   InvitationPreview,
   PASSWORD_RESETS_PATH,
   PasswordResetRequest,
+  SessionProbeResponse,
   SessionResponse,
   SignInRequest,
 } from '@shared/auth';
@@ -21,8 +22,8 @@ export const SESSION_URL = `${AUTH_PATH}/session`;
 export class AuthClient {
   private readonly http = inject(HttpClient);
 
-  session(): Observable<SessionResponse> {
-    return this.http.get<SessionResponse>(SESSION_URL);
+  session(): Observable<SessionProbeResponse> {
+    return this.http.get<SessionProbeResponse>(SESSION_URL);
   }
 
   signIn(request: SignInRequest): Observable<SessionResponse> {

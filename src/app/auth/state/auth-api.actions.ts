@@ -5,7 +5,7 @@ import { FieldErrors } from '@app/ui/server-field-errors';
 export const AuthApiActions = createActionGroup({
   source: 'Auth API',
   events: {
-    'Session Loaded Success': props<{ user: SessionUser | null }>(),
+    'Session Loaded Success': props<{ user: SessionUser | null; coopTimeZone: string }>(),
     'Session Loaded Failure': props<{ message: string }>(),
     'Session Expired': emptyProps(),
     'Sign In Success': props<{ user: SessionUser; returnUrl: string }>(),

@@ -31,11 +31,11 @@ describe('auth effects', () => {
   describe('loadSession', () => {
     it('maps the session probe at start-up to Session Loaded Success', async () => {
       const user = generateMockSessionUser();
-      const client = fakeClient({ session: () => of({ user }) });
+      const client = fakeClient({ session: () => of({ user, coopTimeZone: 'Europe/Berlin' }) });
 
       const result = await firstValueFrom(loadSession(actionsOf({ type: ROOT_EFFECTS_INIT }), client));
 
-      expect(result).toEqual(AuthApiActions.sessionLoadedSuccess({ user }));
+      expect(result).toEqual(AuthApiActions.sessionLoadedSuccess({ user, coopTimeZone: 'Europe/Berlin' }));
     });
 
     it('maps an unreachable server to Session Loaded Failure with a message', async () => {

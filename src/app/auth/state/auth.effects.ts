@@ -20,7 +20,7 @@ export const loadSession = createEffect(
       ofType(ROOT_EFFECTS_INIT),
       exhaustMap(() =>
         client.session().pipe(
-          map(({ user }) => AuthApiActions.sessionLoadedSuccess({ user })),
+          map(({ user, coopTimeZone }) => AuthApiActions.sessionLoadedSuccess({ user, coopTimeZone })),
           catchError((error: unknown) =>
             of(AuthApiActions.sessionLoadedFailure({ message: apiErrorMessage(error, 'Your session could not be checked.') })),
           ),

@@ -11,9 +11,9 @@ describe('authFeature reducer', () => {
   it('marks the session loaded with the user from the start-up probe', () => {
     const user = generateMockSessionUser();
 
-    const state = reducer(initialAuthState, AuthApiActions.sessionLoadedSuccess({ user }));
+    const state = reducer(initialAuthState, AuthApiActions.sessionLoadedSuccess({ user, coopTimeZone: 'Europe/Berlin' }));
 
-    expect(state).toEqual({ ...initialAuthState, user, sessionLoaded: true });
+    expect(state).toEqual({ ...initialAuthState, user, coopTimeZone: 'Europe/Berlin', sessionLoaded: true });
   });
 
   it('marks the session loaded without a user when the probe fails', () => {

@@ -15,6 +15,8 @@ export interface AuthState {
   retryAfterSeconds: number | null;
   /** Reasons per sign-in field from a 400 answer. */
   signInFieldErrors: FieldErrors | null;
+  /** IANA zone of the co-op from the session probe; dates are entered and shown in it. */
+  coopTimeZone: string;
 }
 
 export const initialAuthState: AuthState = {
@@ -24,6 +26,7 @@ export const initialAuthState: AuthState = {
   signInError: null,
   retryAfterSeconds: null,
   signInFieldErrors: null,
+  coopTimeZone: 'UTC',
 };
 
 const noRoles: readonly Role[] = [];
@@ -32,7 +35,7 @@ export const authFeature = createFeature({
   name: 'auth',
   reducer: createReducer(
     initialAuthState,
-    on(AuthApiActions.sessionLoadedSuccess, (state, { user }): AuthState => ({ ...state, user, sessionLoaded: true })),
+    on(AuthApiActions.sessionLoadedSuccess, (state, { user, coopTimeZone }): AuthState => ({ ...state, user, coopTimeZone, sessionLoaded: true })),
     on(AuthApiActions.sessionLoadedFailure, (state): AuthState => ({ ...state, user: null, sessionLoaded: true })),
     on(SignInPageActions.opened, (state): AuthState => ({
       ...state,
@@ -66,8 +69,9 @@ export const authFeature = createFeature({
         ? { ...state, user: { ...state.user, name: member.name, email: member.email, roles: member.roles } }
         : state,
     ),
-    on(AuthApiActions.signOutSuccess, AuthApiActions.sessionExpired, (): AuthState => ({
+    on(AuthApiActions.signOutSuccess, AuthApiActions.sessionExpired, (state): AuthState => ({
       ...initialAuthState,
+      coopTimeZone: state.coopTimeZone,
       sessionLoaded: true,
     })),
   ),
