@@ -1,9 +1,9 @@
 import { Routes } from '@angular/router';
 import { provideEffects } from '@ngrx/effects';
 import { provideState } from '@ngrx/store';
-import * as catalogueSnackBarEffects from './state/catalogue-snack-bar.effects';
-import * as catalogueEffects from './state/catalogue.effects';
-import { catalogueFeature } from './state/catalogue.feature';
+import * as catalogueSnackBarEffects from '@app/catalogue/state/catalogue-snack-bar.effects';
+import * as catalogueEffects from '@app/catalogue/state/catalogue.effects';
+import { catalogueFeature } from '@app/catalogue/state/catalogue.feature';
 import * as preferencesEffects from './state/preferences.effects';
 import * as recipeFileEffects from './state/recipe-file.effects';
 import * as recipeVersionsEffects from './state/recipe-versions.effects';
@@ -32,7 +32,7 @@ export const recipesRoutes: Routes = [
       {
         path: 'catalogue',
         title: 'Ingredient catalogue · Commonwort',
-        loadComponent: () => import('./catalogue-page/catalogue-page').then((m) => m.CataloguePage),
+        loadComponent: () => import('@app/catalogue/catalogue-page/catalogue-page').then((m) => m.CataloguePage),
       },
       { path: 'new', title: 'New recipe · Commonwort', loadComponent: () => import('./recipe-editor-page/recipe-editor-page').then((m) => m.RecipeEditorPage) },
       { path: ':recipeId', loadComponent: () => import('./recipe-editor-page/recipe-editor-page').then((m) => m.RecipeEditorPage) },

@@ -1,6 +1,6 @@
 import { FormControl, FormGroup, NonNullableFormBuilder, Validators } from '@angular/forms';
 import { HopUse, RecipeQuantity, toDisplayUnits, UnitSystem } from '@shared/recipes';
-import { RecipeFormValue } from './recipe-form-model';
+import { RecipeFormValue } from '../view-models/recipe-form-model';
 
 /** Mash temperatures the form accepts, °C; converted for a US-unit person. */
 const MASH_MIN_C = 30;

@@ -11,7 +11,7 @@ import { HopRows } from '../hop-rows/hop-rows';
 import { MashStepRows } from '../mash-step-rows/mash-step-rows';
 import { OtherRows } from '../other-rows/other-rows';
 import { limitIn, MAX_MINUTES, recipeRowGroups, SI_LIMITS } from './recipe-form-groups';
-import { designToFormValue, formValueToDesign, RecipeFormValue } from './recipe-form-model';
+import { designToFormValue, formValueToDesign, RecipeFormValue } from '../view-models/recipe-form-model';
 
 /** The recipe as a reactive form in the person's units; emits the design (SI) as it is typed. */
 @Component({

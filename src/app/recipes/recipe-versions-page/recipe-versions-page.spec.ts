@@ -3,7 +3,7 @@ import { provideRouter } from '@angular/router';
 import { MockStore, provideMockStore } from '@ngrx/store/testing';
 import { generateMockCatalogue, generateMockDesign, MOCK_BREWHOUSE, predictRecipe } from '@shared/recipes';
 import { generateMockRecipe, generateMockVersion } from '@app/testing/recipe-mock';
-import { designDifferences } from '../version-diff/design-differences';
+import { designDifferences } from '../view-models/design-differences';
 import { RecipeVersionsPageActions } from '../state/recipe-versions-page.actions';
 import { selectRecipeVersionsViewModel } from '../state/recipes.selectors';
 import { RecipeVersionsPage } from './recipe-versions-page';

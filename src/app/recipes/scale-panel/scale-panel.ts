@@ -16,7 +16,7 @@ import {
   UnitSystem,
 } from '@shared/recipes';
 import { limitIn, SI_LIMITS } from '../recipe-form/recipe-form-groups';
-import { shownAmount } from '../recipe-form/recipe-form-model';
+import { shownAmount } from '../view-models/recipe-form-model';
 
 /** Scales the design to another batch volume or efficiency, keeping OG and IBU; shows before and after. */
 @Component({

@@ -1,7 +1,7 @@
 import { generateMockCatalogue, generateMockDesign, MOCK_BREWHOUSE, predictRecipe, StyleTarget } from '@shared/recipes';
 import { generateMockRecipe } from '@app/testing/recipe-mock';
-import { CatalogueApiActions } from './catalogue-api.actions';
-import { catalogueFeature, initialCatalogueState } from './catalogue.feature';
+import { CatalogueApiActions } from '@app/catalogue/state/catalogue-api.actions';
+import { catalogueFeature, initialCatalogueState } from '@app/catalogue/state/catalogue.feature';
 import { RecipeEditorPageActions } from './recipe-editor-page.actions';
 import { RecipesApiActions } from './recipes-api.actions';
 import { initialRecipesState, recipesFeature } from './recipes.feature';

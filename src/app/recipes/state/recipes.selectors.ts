@@ -1,10 +1,10 @@
 import { createSelector } from '@ngrx/store';
 import { compareToStyle, predictRecipe, shownAmountText } from '@shared/recipes';
-import { emptyDesign } from '../recipe-form/recipe-form-model';
-import { designDifferences } from '../version-diff/design-differences';
-import { brewDaySheet } from '../brew-day-sheet/brew-day-sheet-model';
-import { catalogueFeature } from './catalogue.feature';
-import { selectBrewhouseOrDefault, selectCatalogue } from './catalogue.selectors';
+import { emptyDesign } from '../view-models/recipe-form-model';
+import { designDifferences } from '../view-models/design-differences';
+import { brewDaySheet } from '../view-models/brew-day-sheet-model';
+import { catalogueFeature } from '@app/catalogue/state/catalogue.feature';
+import { selectBrewhouseOrDefault, selectCatalogue } from '@app/catalogue/state/catalogue.selectors';
 import { recipesFeature } from './recipes.feature';
 
 /** The recipe list, filtered by the search text, with style names. */

@@ -1,7 +1,7 @@
 import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { RecipePrediction, RecipeVersion } from '@shared/recipes';
-import { DesignDifference } from './design-differences';
+import { DesignDifference } from '../view-models/design-differences';
 
 /** Two versions side by side, line by line, with changed lines marked; the predictions of both on top. */
 @Component({

@@ -5,7 +5,7 @@ import { CatalogueImportResult, generateMockCatalogue } from '@shared/recipes';
 import { CatalogueClient } from '../catalogue-client';
 import { CatalogueApiActions } from './catalogue-api.actions';
 import { CataloguePageActions } from './catalogue-page.actions';
-import { RecipeEditorPageActions } from './recipe-editor-page.actions';
+import { RecipeEditorPageActions } from '@app/recipes/state/recipe-editor-page.actions';
 import { commitImport, loadCatalogue, previewImport, saveEntry } from './catalogue.effects';
 
 const actionsOf = (...actions: Action[]) => new Actions(of(...actions));

@@ -3,12 +3,12 @@ import { Actions, createEffect, ofType } from '@ngrx/effects';
 import { catchError, concatMap, exhaustMap, filter, map, merge, mergeMap, of, switchMap } from 'rxjs';
 import { apiErrorMessage } from '@app/core/api-error-message';
 import { CatalogueClient } from '../catalogue-client';
-import { BrewDaySheetPageActions } from './brew-day-sheet-page.actions';
+import { BrewDaySheetPageActions } from '@app/recipes/state/brew-day-sheet-page.actions';
 import { CatalogueApiActions } from './catalogue-api.actions';
 import { CataloguePageActions } from './catalogue-page.actions';
-import { RecipeEditorPageActions } from './recipe-editor-page.actions';
-import { RecipeListPageActions } from './recipe-list-page.actions';
-import { RecipeVersionsPageActions } from './recipe-versions-page.actions';
+import { RecipeEditorPageActions } from '@app/recipes/state/recipe-editor-page.actions';
+import { RecipeListPageActions } from '@app/recipes/state/recipe-list-page.actions';
+import { RecipeVersionsPageActions } from '@app/recipes/state/recipe-versions-page.actions';
 
 /** Pages that need the catalogue, the style list and the brewhouse to show predictions. */
 const pagesNeedingCatalogue = [

@@ -8,14 +8,14 @@ import { MatTab, MatTabGroup } from '@angular/material/tabs';
 import { RouterLink } from '@angular/router';
 import { Store } from '@ngrx/store';
 import { BrewhouseSettings, INGREDIENT_KINDS, IngredientKind, StyleTarget, StyleTargetInput } from '@shared/recipes';
-import { BrewhouseForm } from '../brewhouse-form/brewhouse-form';
+import { BrewhouseForm } from '@app/brewhouse/brewhouse-form/brewhouse-form';
 import { CATALOGUE_CSV_COLUMNS, KIND_LABELS } from '../catalogue-columns';
 import { CatalogueEntry, CatalogueEntryInput } from '../catalogue-entry';
 import { CatalogueEntryForm } from '../catalogue-entry-form/catalogue-entry-form';
 import { CatalogueTable, RetiredChange } from '../catalogue-table/catalogue-table';
 import { CsvImportPreview } from '../csv-import-preview/csv-import-preview';
-import { StyleForm } from '../style-form/style-form';
-import { StyleTable } from '../style-table/style-table';
+import { StyleForm } from '@app/styles/style-form/style-form';
+import { StyleTable } from '@app/styles/style-table/style-table';
 import { CataloguePageActions } from '../state/catalogue-page.actions';
 import { selectBrewhouseOrDefault, selectCataloguePageViewModel } from '../state/catalogue.selectors';
 
