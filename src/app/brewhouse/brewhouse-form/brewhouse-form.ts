@@ -22,7 +22,7 @@ const FIELDS: { key: NumericKey; label: string; unit: string; min: number; max: 
   selector: 'cw-brewhouse-form',
   imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatButton],
   templateUrl: './brewhouse-form.html',
-  styleUrl: '../catalogue-entry-form/catalogue-entry-form.scss',
+  styleUrl: '../../catalogue/catalogue-entry-form/catalogue-entry-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class BrewhouseForm {

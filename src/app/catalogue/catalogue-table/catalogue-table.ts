@@ -16,7 +16,7 @@ export interface RetiredChange {
   selector: 'cw-catalogue-table',
   imports: [MatButton],
   templateUrl: './catalogue-table.html',
-  styleUrl: '../recipe-table/recipe-table.scss',
+  styleUrl: '../../recipes/recipe-table/recipe-table.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class CatalogueTable {

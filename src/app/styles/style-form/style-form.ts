@@ -23,7 +23,7 @@ function orderedRange(group: AbstractControl): ValidationErrors | null {
   selector: 'cw-style-form',
   imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatInput, MatButton],
   templateUrl: './style-form.html',
-  styleUrl: '../catalogue-entry-form/catalogue-entry-form.scss',
+  styleUrl: '../../catalogue/catalogue-entry-form/catalogue-entry-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class StyleForm {

@@ -38,7 +38,7 @@ import { StyleTarget } from '@shared/recipes';
       </table>
     </div>
   `,
-  styleUrl: '../recipe-table/recipe-table.scss',
+  styleUrl: '../../recipes/recipe-table/recipe-table.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class StyleTable {
