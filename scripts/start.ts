@@ -5,6 +5,7 @@ import { createApp } from '../server/app';
 import { loadConfig } from '../server/config';
 import { DEMO_MEMBERS, DEMO_PASSWORD } from '../seeds/01_demo_coop_members';
 import { ensureDatabaseAndUser, openMigratedDb, seed } from './setup/app-database';
+import { LocalFakes, startLocalFakes } from './setup/local-fakes';
 import { buildClientIfStale } from './setup/client-build';
 import { readOrCreateSecrets } from './setup/local-secrets';
 import { PrivateMariaDb, startPrivateMariaDb } from './setup/private-mariadb';
@@ -14,7 +15,7 @@ import { ensureSystemPackages } from './setup/system-packages';
 const root = join(__dirname, '..');
 const home = join(root, '.data', 'dev');
 
-function banner(url: string): void {
+function banner(url: string, fakes: LocalFakes): void {
   const demo = DEMO_MEMBERS.slice(0, 4).map((m) => `    ${m.email.padEnd(28)} ${m.roles.join(', ')}`);
   console.log(
     [
@@ -23,6 +24,9 @@ function banner(url: string): void {
       '',
       `  Demo sign-ins (password for all: ${DEMO_PASSWORD}):`,
       ...demo,
+      '',
+      `  Card payments run against a local Stripe fake (test mode); e-mails are caught, not delivered:`,
+      `    read them at ${fakes.mail.apiUrl}/messages or on the Outbox page.`,
       '',
       '  Press Ctrl-C to stop (the database is shut down with it).',
       '',
@@ -43,10 +47,12 @@ async function main(): Promise<void> {
   let mariadb: PrivateMariaDb | undefined;
   let knex: Knex | undefined;
   let server: Server | undefined;
+  let fakes: LocalFakes | undefined;
   let closeApp = () => {};
   const stop = async (code: number) => {
     server?.close();
     closeApp();
+    await fakes?.stop();
     await knex?.destroy();
     mariadb?.stop();
     process.exit(code);
@@ -58,17 +64,18 @@ async function main(): Promise<void> {
     const secrets = readOrCreateSecrets(home);
     const dbPort = Number(process.env.DB_PORT ?? 3407);
     mariadb = await startPrivateMariaDb({ home, port: dbPort });
-    const config = loadConfig({ ...process.env, DB_PORT: String(mariadb.port), DB_PASSWORD: secrets.dbPassword, SESSION_SECRET: secrets.sessionSecret });
+    fakes = await startLocalFakes();
+    const config = loadConfig({ ...process.env, ...fakes.env, DB_PORT: String(mariadb.port), DB_PASSWORD: secrets.dbPassword, SESSION_SECRET: secrets.sessionSecret });
     ensureDatabaseAndUser(mariadb, config.db, false);
     knex = await openMigratedDb(config.db);
     await seed(knex);
     buildClientIfStale(root, config.clientDist);
     step('Starting the web server');
-    const created = createApp({ config, db: knex });
+    const created = createApp({ config, db: knex, runScheduler: true });
     closeApp = created.close;
     server = await listen(created.app, config.port, config.host);
     done('Ready');
-    banner(config.publicUrl);
+    banner(config.publicUrl, fakes);
   } catch (error) {
     await stop(reportFailure(error));
   }

@@ -1,4 +1,4 @@
-import { spawnSync } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { mkdirSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { Knex } from 'knex';
@@ -6,6 +6,7 @@ import { loadConfig } from '../server/config';
 import { ensureDatabaseAndUser, openMigratedDb } from './setup/app-database';
 import { buildClientIfStale } from './setup/client-build';
 import { freePort } from './setup/free-port';
+import { LocalFakes, startLocalFakes } from './setup/local-fakes';
 import { readOrCreateSecrets } from './setup/local-secrets';
 import { PrivateMariaDb, startPrivateMariaDb } from './setup/private-mariadb';
 import { reportFailure, step } from './setup/step-log';
@@ -15,27 +16,31 @@ const root = join(__dirname, '..');
 const home = join(root, '.data', 'test');
 const report = join(root, 'test-results', 'jest.json');
 
-function runJest(env: NodeJS.ProcessEnv, extraArgs: string[]): number {
+async function runJestAsync(env: NodeJS.ProcessEnv, extraArgs: string[]): Promise<number> {
   step('Running every test: shared, server, client, integration (real MariaDB) and end-to-end (Chromium)');
   mkdirSync(join(root, 'test-results'), { recursive: true });
   rmSync(report, { force: true });
   const args = ['--maxWorkers=2', '--json', `--outputFile=${report}`, ...(process.env.CI ? ['--ci'] : []), ...extraArgs];
-  const result = spawnSync(join(root, 'node_modules', '.bin', 'jest'), args, { cwd: root, stdio: 'inherit', env });
+  const jest = spawn(join(root, 'node_modules', '.bin', 'jest'), args, { cwd: root, stdio: 'inherit', env });
+  const status = await new Promise<number | null>((resolve) => jest.once('exit', (code) => resolve(code)));
   spawnSync(process.execPath, [join(__dirname, 'print-test-summary.mjs'), report], { stdio: 'inherit' });
-  return result.status ?? 1;
+  return status ?? 1;
 }
 
 async function main(): Promise<number> {
   let mariadb: PrivateMariaDb | undefined;
   let knex: Knex | undefined;
+  let fakes: LocalFakes | undefined;
   try {
     ensureSystemPackages(['mariadb-server', 'chromium']);
     const secrets = readOrCreateSecrets(home);
     // A free port unless one is asked for, so two checkouts can test at the same time.
     const dbPort = process.env.TEST_DB_PORT ? Number(process.env.TEST_DB_PORT) : await freePort();
     mariadb = await startPrivateMariaDb({ home, port: dbPort });
+    fakes = await startLocalFakes();
     const env = {
       ...process.env,
+      ...fakes.env,
       NODE_ENV: 'test',
       DB_PORT: String(mariadb.port),
       DB_NAME: 'commonwort_test',
@@ -54,11 +59,13 @@ async function main(): Promise<number> {
     const jestArgs = process.argv.slice(2);
     // A run limited to some projects needs the built app only when it includes the browser tests.
     if (!jestArgs.includes('--selectProjects') || jestArgs.includes('e2e')) buildClientIfStale(root, config.clientDist);
-    return runJest(env, jestArgs);
+    // Jest runs in a child process while the fakes keep answering from this one.
+    return await runJestAsync(env, jestArgs);
   } catch (error) {
     return reportFailure(error);
   } finally {
     await knex?.destroy();
+    await fakes?.stop();
     mariadb?.stop();
   }
 }

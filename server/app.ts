@@ -31,6 +31,9 @@ import { createPreferencesRouter } from './preferences/preferences.routes';
 import { createRecipesRouter, createRecipesService } from './recipes';
 import { createStylesRouter } from './styles/styles.routes';
 import { createStylesService } from './styles/styles.service';
+import { createDuesLedgerService, createDuesPaymentsService, createDuesRenewalsService, createDuesRouter, createStripeGateway, DuesRenewalsService } from './dues';
+import { createMailRouter, createMailSender, createOutboxDispatcher, createOutboxService, OutboxDispatcher } from './mail';
+import { processHolderId, startScheduler } from './scheduler/scheduler';
 
 export interface AppDeps {
   config: Config;
@@ -40,11 +43,15 @@ export interface AppDeps {
   publicRequestLimit?: PublicRequestLimit;
   /** Interval of the expired-session sweep; 0 turns it off (tests). */
   sessionCleanupMs?: number;
+  /** Runs the outbox, renewal and reminder jobs inside this process (the server does; most tests call them directly). */
+  runScheduler?: boolean;
 }
 
 /** The app and what must be closed with it. */
 export interface CreatedApp {
   app: Express;
+  /** The scheduled work, also callable directly. */
+  jobs: { outbox: OutboxDispatcher; dues: DuesRenewalsService };
   close(): void;
 }
 
@@ -67,7 +74,7 @@ const contentSecurityPolicy = {
 };
 
 /** Builds the Express app: API routers under /api, the built client, one error handler last. */
-export function createApp({ config, db, signInLimits, publicRequestLimit, sessionCleanupMs = 15 * 60 * 1000 }: AppDeps): CreatedApp {
+export function createApp({ config, db, signInLimits, publicRequestLimit, sessionCleanupMs = 15 * 60 * 1000, runScheduler = false }: AppDeps): CreatedApp {
   const app = express();
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
@@ -109,8 +116,37 @@ export function createApp({ config, db, signInLimits, publicRequestLimit, sessio
   mountApi(app, '/api/styles', createStylesRouter(createStylesService(db)));
   mountApi(app, '/api/brewhouse', createBrewhouseRouter(db));
   mountApi(app, '/api/recipes', createRecipesRouter(createRecipesService(db), db));
+  const duesDeps = { db, gateway: createStripeGateway(config.stripe), coopTimeZone: config.coopTimeZone, publicUrl: config.publicUrl };
+  const duesLedger = createDuesLedgerService({ db, coopTimeZone: config.coopTimeZone, testMode: config.stripe.testMode });
+  mountApi(app, '/api/dues', createDuesRouter(duesLedger, createDuesPaymentsService(duesDeps)));
+  mountApi(app, '/api/admin/mail', createMailRouter(createOutboxService(db)));
   app.use('/api', apiNotFound);
   app.use(createClientRouter(config.clientDist));
   app.use(errorMiddleware);
-  return { app, close: sessions.close };
+
+  const holder = processHolderId();
+  const jobs = {
+    outbox: createOutboxDispatcher({ db, send: createMailSender(config.smtp), holder }),
+    dues: createDuesRenewalsService(duesDeps),
+  };
+  const scheduler = runScheduler
+    ? startScheduler({
+        db,
+        holder,
+        logger,
+        jobs: [
+          { name: 'outbox', everySeconds: config.mailDispatchSeconds, exclusive: false, run: () => jobs.outbox.dispatchDue() },
+          { name: 'dues-renewals', everySeconds: 3600, exclusive: true, run: () => jobs.dues.runRenewals() },
+          { name: 'dues-overdue-reminders', everySeconds: 3600, exclusive: true, run: () => jobs.dues.sendOverdueReminders() },
+        ],
+      })
+    : null;
+  return {
+    app,
+    jobs,
+    close: () => {
+      scheduler?.stop();
+      sessions.close();
+    },
+  };
 }

@@ -25,6 +25,17 @@ const configSchema = z.object({
     .string()
     .default('Europe/Berlin')
     .refine((zone) => IANAZone.isValidZone(zone), 'an IANA time zone such as Europe/Berlin'),
+  STRIPE_SECRET_KEY: z.string().regex(/^sk_(test|live)_\w+$/, 'a Stripe secret key (sk_test_… or sk_live_…)').default('sk_test_commonwort_local'),
+  STRIPE_API_HOST: z.string().min(1).optional(),
+  STRIPE_API_PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  STRIPE_API_PROTOCOL: z.enum(['http', 'https']).default('https'),
+  SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+  SMTP_SECURE: booleanFlag,
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().min(3).default('Commonwort <no-reply@commonwort.invalid>'),
+  MAIL_DISPATCH_SECONDS: z.coerce.number().int().min(1).max(3600).default(10),
 });
 
 /** The server's settings, validated once at start-up. */
@@ -41,6 +52,12 @@ export interface Config {
   clientDist: string;
   /** Wall-clock zone of the co-op: bookings, brew days and readings are entered and shown in it. */
   coopTimeZone: string;
+  /** Card payments; `testMode` when the key is a test key (the pay dialog then offers the test cards). */
+  stripe: { secretKey: string; host?: string; port?: number; protocol: 'http' | 'https'; testMode: boolean };
+  /** Outgoing mail: the SMTP server the outbox delivers to. */
+  smtp: { host: string; port: number; secure: boolean; user?: string; password?: string; from: string };
+  /** How often the outbox is swept for messages to send. */
+  mailDispatchSeconds: number;
 }
 
 /** Reads the configuration from environment variables; throws naming every bad variable. */
@@ -63,5 +80,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     trustProxy: e.TRUST_PROXY,
     clientDist: e.CLIENT_DIST,
     coopTimeZone: e.COOP_TIME_ZONE,
+    stripe: {
+      secretKey: e.STRIPE_SECRET_KEY,
+      host: e.STRIPE_API_HOST,
+      port: e.STRIPE_API_PORT,
+      protocol: e.STRIPE_API_PROTOCOL,
+      testMode: e.STRIPE_SECRET_KEY.startsWith('sk_test_'),
+    },
+    smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, secure: e.SMTP_SECURE, user: e.SMTP_USER || undefined, password: e.SMTP_PASSWORD || undefined, from: e.MAIL_FROM },
+    mailDispatchSeconds: e.MAIL_DISPATCH_SECONDS,
   };
 }

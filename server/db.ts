@@ -89,6 +89,79 @@ export interface KitItemRow {
   updated_at: Date;
 }
 
+export interface DuesPlanRow {
+  id: number;
+  name: string;
+  amount_cents: number;
+  currency: string;
+  period: 'month' | 'year';
+  active: number | boolean;
+  created_by_user_id: number | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface DuesMembershipRow {
+  user_id: number;
+  plan_id: number | null;
+  /** DATE: comes back as a Date at midnight UTC. */
+  paid_through: Date | null;
+  stripe_customer_id: string | null;
+  saved_card: string | null;
+  renew_by_card: number | boolean;
+  updated_at: Date;
+}
+
+export interface DuesPaymentRow {
+  id: number;
+  user_id: number;
+  plan_id: number | null;
+  plan_name: string;
+  amount_cents: number;
+  currency: string;
+  method: 'card' | 'cash';
+  kind: 'payment' | 'renewal';
+  status: 'succeeded' | 'refunded';
+  idempotency_key: string;
+  stripe_charge_id: string | null;
+  stripe_refund_id: string | null;
+  period_start: Date;
+  period_end: Date;
+  previous_paid_through: Date | null;
+  note: string;
+  recorded_by_user_id: number | null;
+  refunded_at: Date | null;
+  refunded_by_user_id: number | null;
+  created_at: Date;
+}
+
+export interface OutboxMessageRow {
+  id: number;
+  kind: string;
+  recipient: string;
+  subject: string;
+  text_body: string;
+  html_body: string;
+  state: 'queued' | 'sending' | 'sent' | 'failed' | 'abandoned';
+  attempts: number;
+  next_attempt_at: Date;
+  claimed_by: string | null;
+  claim_expires_at: Date | null;
+  last_error: string | null;
+  sent_at: Date | null;
+  dedupe_key: string | null;
+  created_at: Date;
+}
+
+export interface JobLeaseRow {
+  name: string;
+  holder: string | null;
+  lease_until: Date;
+  last_run_at: Date | null;
+}
+
+type DateInput = Date | string;
+
 declare module 'knex/types/tables' {
   interface Tables {
     users: Knex.CompositeTableType<UserRow, Omit<UserRow, 'id' | 'created_at' | 'updated_at' | 'password_reset_requested_at' | 'unit_system'>, Partial<UserRow>>;
@@ -98,6 +171,15 @@ declare module 'knex/types/tables' {
     recipes: Knex.CompositeTableType<RecipeRow, Omit<RecipeRow, 'id' | 'created_at' | 'updated_at' | 'archived_at' | 'current_version'> & { current_version?: number }, Partial<RecipeRow>>;
     recipe_versions: Knex.CompositeTableType<RecipeVersionRow, Omit<RecipeVersionRow, 'id' | 'created_at' | 'design'> & { design: string }>;
     kit_items: Knex.CompositeTableType<KitItemRow, Omit<KitItemRow, 'id' | 'created_at' | 'updated_at' | 'state' | 'notes' | 'capacity_litres'> & { state?: KitState; notes?: string; capacity_litres: number | null }, Partial<Omit<KitItemRow, 'capacity_litres'>> & { capacity_litres?: number | null }>;
+    dues_plans: Knex.CompositeTableType<DuesPlanRow, Pick<DuesPlanRow, 'name' | 'amount_cents' | 'currency' | 'period'> & { created_by_user_id?: number | null }, Partial<DuesPlanRow>>;
+    dues_memberships: Knex.CompositeTableType<DuesMembershipRow, Omit<Partial<DuesMembershipRow>, 'paid_through'> & { user_id: number; paid_through?: DateInput | null }, Omit<Partial<DuesMembershipRow>, 'paid_through'> & { paid_through?: DateInput | null }>;
+    dues_payments: Knex.CompositeTableType<
+      DuesPaymentRow,
+      Omit<DuesPaymentRow, 'id' | 'created_at' | 'status' | 'stripe_refund_id' | 'refunded_at' | 'refunded_by_user_id' | 'period_start' | 'period_end' | 'previous_paid_through'> & { period_start: DateInput; period_end: DateInput; previous_paid_through: DateInput | null },
+      Partial<Pick<DuesPaymentRow, 'status' | 'stripe_refund_id' | 'refunded_at' | 'refunded_by_user_id'>>
+    >;
+    outbox_messages: Knex.CompositeTableType<OutboxMessageRow, Pick<OutboxMessageRow, 'kind' | 'recipient' | 'subject' | 'text_body' | 'html_body'> & { dedupe_key?: string | null }, Partial<OutboxMessageRow>>;
+    job_leases: JobLeaseRow;
     audit_log: Knex.CompositeTableType<AuditLogRow, Omit<AuditLogRow, 'id' | 'created_at' | 'detail'> & { detail: string | null }>;
   }
 }

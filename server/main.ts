@@ -6,7 +6,7 @@ import { createDb } from './db';
 async function main(): Promise<void> {
   const config = loadConfig();
   const db = createDb(config.db);
-  const { app, close } = createApp({ config, db });
+  const { app, close } = createApp({ config, db, runScheduler: true });
   const server = app.listen(config.port, config.host, () => {
     console.log(`Commonwort is listening on ${config.publicUrl}`);
   });

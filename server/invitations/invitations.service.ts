@@ -6,6 +6,8 @@ import { createOneTimeToken, hashOneTimeToken } from '../auth/one-time-token';
 import { PasswordHasher } from '../auth/password-hasher';
 import { toSessionUser } from '../auth/auth.service';
 import { AppError } from '../errors/app-error';
+import { outboxRepository } from '../mail/outbox.repository';
+import { invitationMail } from '../mail/templates/account-mails';
 import { usersRepository } from '../users/users.repository';
 import { invitationsRepository } from './invitations.repository';
 
@@ -22,21 +24,24 @@ export function createInvitationsService(deps: { db: Knex; hasher: PasswordHashe
   return {
     listPending: () => invitationsRepository.listPending(db, now()),
 
-    /** Creates an invitation (withdrawing older ones to the same address) and returns it with its link. */
+    /** Creates an invitation (withdrawing older ones to the same address), mails it, and returns it with its link. */
     async create(actorId: number, email: string, roles: Role[]): Promise<Invitation> {
       if (await usersRepository.emailTaken(db, email)) {
         throw new AppError('email-taken', 'Someone with this e-mail is already a member.', 409, { email: 'is already a member' });
       }
       const { token, hash } = createOneTimeToken();
       const expiresAt = new Date(now().getTime() + INVITATION_DAYS * 24 * 3600 * 1000);
+      const link = `${deps.publicUrl}/invitations/${token}`;
+      const inviter = await usersRepository.findById(db, actorId);
       const id = await db.transaction(async (trx) => {
         await invitationsRepository.revokePendingForEmail(trx, email, now());
         const newId = await invitationsRepository.insert(trx, { email, roles, token_hash: hash, invited_by_user_id: actorId, expires_at: expiresAt });
+        await outboxRepository.enqueue(trx, { kind: 'invitation', to: email, ...invitationMail({ link, expiresAt, invitedBy: inviter?.name ?? 'An officer of the co-op' }) });
         await recordAudit(trx, { actorUserId: actorId, action: 'invitation-created', subjectType: 'invitation', subjectId: newId, detail: { email, roles } });
         return newId;
       });
       const invitation = await invitationsRepository.findPendingById(db, id, now());
-      return { ...invitation!, link: `${deps.publicUrl}/invitations/${token}` };
+      return { ...invitation!, link };
     },
 
     async revoke(actorId: number, id: number): Promise<void> {

@@ -4,23 +4,33 @@ import { recordAudit } from '../audit/audit-log';
 import { createOneTimeToken, hashOneTimeToken } from '../auth/one-time-token';
 import { PasswordHasher } from '../auth/password-hasher';
 import { AppError } from '../errors/app-error';
+import { outboxRepository } from '../mail/outbox.repository';
+import { passwordResetMail } from '../mail/templates/account-mails';
 import { usersRepository } from '../users/users.repository';
 import { passwordResetsRepository } from './password-resets.repository';
 
 const RESET_HOURS = 24;
 
-/** Forgotten passwords: a request is noted for the officers; a one-time link with an expiry sets a new one. */
+/** Forgotten passwords: a request mails the member a one-time link (and is noted for the officers, who can also hand out a link). */
 export function createPasswordResetsService(deps: { db: Knex; hasher: PasswordHasher; publicUrl: string; now?: () => Date }) {
   const { db, hasher } = deps;
   const now = deps.now ?? (() => new Date());
 
   return {
-    /** Notes the request when the e-mail belongs to an active member; says nothing either way. */
+    /** Mails a one-time link when the e-mail belongs to an active member; says nothing either way. */
     async request(email: string): Promise<void> {
       const found = await usersRepository.findCredentials(db, email);
       if (!found?.user.active) return;
-      await usersRepository.update(db, found.user.id, { password_reset_requested_at: now() });
-      await recordAudit(db, { actorUserId: null, action: 'password-reset-requested', subjectType: 'user', subjectId: found.user.id });
+      const { user } = found;
+      const { token, hash } = createOneTimeToken();
+      const expiresAt = new Date(now().getTime() + RESET_HOURS * 3600 * 1000);
+      await db.transaction(async (trx) => {
+        await usersRepository.update(trx, user.id, { password_reset_requested_at: now() });
+        await passwordResetsRepository.replace(trx, { user_id: user.id, token_hash: hash, issued_by_user_id: null, expires_at: expiresAt }, now());
+        const content = passwordResetMail({ name: user.name, link: `${deps.publicUrl}/reset-password/${token}`, expiresAt });
+        await outboxRepository.enqueue(trx, { kind: 'password-reset', to: user.email, ...content });
+        await recordAudit(trx, { actorUserId: null, action: 'password-reset-requested', subjectType: 'user', subjectId: user.id });
+      });
     },
 
     /** An officer issues a one-time link to hand to the member. */

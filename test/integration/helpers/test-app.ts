@@ -19,8 +19,10 @@ export interface TestApp extends CreatedApp {
   config: Config;
 }
 
-export function createTestApp(options: { db?: Knex; signInLimits?: SignInThrottleLimits; publicRequestLimit?: PublicRequestLimit } = {}): TestApp {
-  const config = testConfig();
+export function createTestApp(
+  options: { db?: Knex; signInLimits?: SignInThrottleLimits; publicRequestLimit?: PublicRequestLimit; env?: Record<string, string> } = {},
+): TestApp {
+  const config = options.env ? loadConfig({ ...process.env, ...options.env }) : testConfig();
   const db = options.db ?? createDb(config.db);
   const created = createApp({ config, db, signInLimits: options.signInLimits, publicRequestLimit: options.publicRequestLimit, sessionCleanupMs: 0 });
   return { ...created, db, config };
