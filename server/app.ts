@@ -31,6 +31,8 @@ import { createPreferencesRouter } from './preferences/preferences.routes';
 import { createRecipesRouter, createRecipesService } from './recipes';
 import { createStylesRouter } from './styles/styles.routes';
 import { createStylesService } from './styles/styles.service';
+import { createBatchesRouter, createBatchesService } from './batches';
+import { createBatchReadingsRouter, createPushRouter, createPushTokensService, createReadingsRouter, createReadingsService, DEFAULT_PUSH_RATE_LIMIT, PushRateLimit } from './readings';
 import { createDuesLedgerService, createDuesPaymentsService, createDuesRenewalsService, createDuesRouter, createStripeGateway, DuesRenewalsService } from './dues';
 import { createMailRouter, createMailSender, createOutboxDispatcher, createOutboxService, OutboxDispatcher } from './mail';
 import { processHolderId, startScheduler } from './scheduler/scheduler';
@@ -41,6 +43,8 @@ export interface AppDeps {
   signInLimits?: SignInThrottleLimits;
   /** Cap on anonymous password-reset requests per address. */
   publicRequestLimit?: PublicRequestLimit;
+  /** Cap on logger pushes per token and address. */
+  pushRateLimit?: PushRateLimit;
   /** Interval of the expired-session sweep; 0 turns it off (tests). */
   sessionCleanupMs?: number;
   /** Runs the outbox, renewal and reminder jobs inside this process (the server does; most tests call them directly). */
@@ -74,7 +78,7 @@ const contentSecurityPolicy = {
 };
 
 /** Builds the Express app: API routers under /api, the built client, one error handler last. */
-export function createApp({ config, db, signInLimits, publicRequestLimit, sessionCleanupMs = 15 * 60 * 1000, runScheduler = false }: AppDeps): CreatedApp {
+export function createApp({ config, db, signInLimits, publicRequestLimit, pushRateLimit = DEFAULT_PUSH_RATE_LIMIT, sessionCleanupMs = 15 * 60 * 1000, runScheduler = false }: AppDeps): CreatedApp {
   const app = express();
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
@@ -105,7 +109,13 @@ export function createApp({ config, db, signInLimits, publicRequestLimit, sessio
   const invitations = createInvitationsService({ db, hasher, publicUrl: config.publicUrl });
   const resets = createPasswordResetsService({ db, hasher, publicUrl: config.publicUrl });
 
+  const recipes = createRecipesService(db);
+  const pushTokens = createPushTokensService(db);
+  const readings = createReadingsService(db);
+
   mountApi(app, '/api/health', createHealthRouter(db));
+  // Loggers push with a token of their own: no session, no CSRF, so this sits before both.
+  mountApi(app, '/api/readings/push', createPushRouter(pushTokens, db, pushRateLimit));
   app.use('/api', sessions.middleware, passport.session(), csrfProtection);
   mountApi(app, '/api/auth', createAuthRouter({ auth, passport, throttle: createSignInThrottle(signInLimits), coopTimeZone: config.coopTimeZone }));
   mountApi(app, '/api/invitations', createInvitationsRouter(invitations));
@@ -115,7 +125,10 @@ export function createApp({ config, db, signInLimits, publicRequestLimit, sessio
   mountApi(app, '/api/ingredients', createCatalogueRouter(createCatalogueService(db)));
   mountApi(app, '/api/styles', createStylesRouter(createStylesService(db)));
   mountApi(app, '/api/brewhouse', createBrewhouseRouter(db));
-  mountApi(app, '/api/recipes', createRecipesRouter(createRecipesService(db), db));
+  mountApi(app, '/api/recipes', createRecipesRouter(recipes, db));
+  mountApi(app, '/api/batches', createBatchesRouter(createBatchesService(db, recipes), db));
+  mountApi(app, '/api/batches', createBatchReadingsRouter(readings, pushTokens, db, config.coopTimeZone));
+  mountApi(app, '/api/readings', createReadingsRouter(readings));
   const duesDeps = { db, gateway: createStripeGateway(config.stripe), coopTimeZone: config.coopTimeZone, publicUrl: config.publicUrl };
   const duesLedger = createDuesLedgerService({ db, coopTimeZone: config.coopTimeZone, testMode: config.stripe.testMode });
   mountApi(app, '/api/dues', createDuesRouter(duesLedger, createDuesPaymentsService(duesDeps)));

@@ -4,6 +4,8 @@ import { Config } from './config';
 import { Role } from '@shared/auth';
 import { KitKind, KitState } from '@shared/kit';
 import { RecipeDesign } from '@shared/recipes';
+import { BatchPrediction, BatchStatus } from '@shared/batches';
+import { GravityUnit, ImportMode, Instrument, ReadingSource } from '@shared/readings';
 
 export interface UserRow {
   id: number;
@@ -162,6 +164,99 @@ export interface JobLeaseRow {
 
 type DateInput = Date | string;
 
+/** DECIMAL columns come back from the driver as strings. */
+type Decimal = string;
+
+export interface BatchRow {
+  id: number;
+  name: string;
+  brewer_user_id: number;
+  created_by_user_id: number;
+  recipe_id: number | null;
+  recipe_version: number | null;
+  predicted: BatchPrediction | null;
+  brew_date: Date;
+  planned_volume_litres: Decimal;
+  fermenter_kit_item_id: number | null;
+  status: BatchStatus;
+  planned_at: Date;
+  brewing_at: Date | null;
+  fermenting_at: Date | null;
+  conditioning_at: Date | null;
+  packaged_at: Date | null;
+  archived_at: Date | null;
+  wort_correction_factor: Decimal;
+  notes: string;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface BrewDayMeasurementsRow {
+  batch_id: number;
+  pre_boil_litres: Decimal | null;
+  pre_boil_gravity: Decimal | null;
+  fermenter_litres: Decimal | null;
+  original_gravity: Decimal | null;
+  original_gravity_temperature_c: Decimal | null;
+  pitched_at: Date | null;
+  updated_by_user_id: number;
+  updated_at: Date;
+}
+
+export interface GravityReadingRow {
+  id: number;
+  batch_id: number;
+  measured_at: Date;
+  instrument: Instrument;
+  raw_value: Decimal;
+  raw_unit: GravityUnit;
+  sample_temperature_c: Decimal | null;
+  calibration_temperature_c: Decimal | null;
+  correction_factor: Decimal | null;
+  original_brix: Decimal | null;
+  corrected_sg: Decimal;
+  source: ReadingSource;
+  upload_id: number | null;
+  push_token_id: number | null;
+  note: string;
+  created_by_user_id: number | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface ReadingUploadRow {
+  id: number;
+  batch_id: number;
+  file_name: string;
+  mode: ImportMode;
+  rows_total: number;
+  rows_imported: number;
+  rows_duplicate: number;
+  rows_rejected: number;
+  created_by_user_id: number;
+  created_at: Date;
+}
+
+export interface BatchPushTokenRow {
+  id: number;
+  batch_id: number;
+  label: string;
+  token_hash: string;
+  created_by_user_id: number;
+  created_at: Date;
+  last_used_at: Date | null;
+  revoked_at: Date | null;
+}
+
+export interface PushRateWindowRow {
+  rate_key: string;
+  window_start: number;
+  hits: number;
+}
+
+/** Values a write may give where the driver reads back a DECIMAL string. */
+type Writable<Row> = { [K in keyof Row]?: Row[K] extends Decimal | null ? number | string | null : Row[K] };
+
 declare module 'knex/types/tables' {
   interface Tables {
     users: Knex.CompositeTableType<UserRow, Omit<UserRow, 'id' | 'created_at' | 'updated_at' | 'password_reset_requested_at' | 'unit_system'>, Partial<UserRow>>;
@@ -180,6 +275,12 @@ declare module 'knex/types/tables' {
     >;
     outbox_messages: Knex.CompositeTableType<OutboxMessageRow, Pick<OutboxMessageRow, 'kind' | 'recipient' | 'subject' | 'text_body' | 'html_body'> & { dedupe_key?: string | null }, Partial<OutboxMessageRow>>;
     job_leases: JobLeaseRow;
+    batches: Knex.CompositeTableType<BatchRow, Writable<Omit<BatchRow, 'predicted'>> & { predicted?: string | null }, Writable<Omit<BatchRow, 'predicted'>>>;
+    brew_day_measurements: Knex.CompositeTableType<BrewDayMeasurementsRow, Writable<BrewDayMeasurementsRow>, Writable<BrewDayMeasurementsRow>>;
+    gravity_readings: Knex.CompositeTableType<GravityReadingRow, Writable<GravityReadingRow>, Writable<GravityReadingRow>>;
+    reading_uploads: Knex.CompositeTableType<ReadingUploadRow, Writable<ReadingUploadRow>, Writable<ReadingUploadRow>>;
+    batch_push_tokens: Knex.CompositeTableType<BatchPushTokenRow, Writable<BatchPushTokenRow>, Writable<BatchPushTokenRow>>;
+    push_rate_windows: PushRateWindowRow;
     audit_log: Knex.CompositeTableType<AuditLogRow, Omit<AuditLogRow, 'id' | 'created_at' | 'detail'> & { detail: string | null }>;
   }
 }

@@ -1,9 +1,11 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
+import { BatchPrediction } from '@shared/batches';
 import { Recipe, RecipeDesign, RecipeSummary, RecipeVersion, RecipeVersionSummary, RecipeVisibility, UpdateRecipeRequest } from '@shared/recipes';
 import { recordAudit } from '../audit/audit-log';
 import { AppError, forbidden } from '../errors/app-error';
 import { assertReferencesExist } from './recipe-references';
+import { predictVersion } from './version-prediction';
 import { RecipeRecord, recipesRepository } from './recipes.repository';
 
 function toSummary(row: RecipeRecord): RecipeSummary {
@@ -105,6 +107,12 @@ export function createRecipesService(db: Knex) {
       const found = await recipesRepository.findVersion(db, id, version);
       if (!found) throw new AppError('version-not-found', `This recipe has no version ${version}.`, 404);
       return found;
+    },
+
+    /** A saved version the caller may see, with its name and what it predicts (for starting a batch). */
+    async versionPrediction(user: SessionUser, id: number, version: number): Promise<{ recipeName: string; prediction: BatchPrediction }> {
+      const found = await this.version(user, id, version);
+      return { recipeName: found.design.name, prediction: await predictVersion(db, found.design) };
     },
   };
 }

@@ -13,7 +13,11 @@ const PUBLIC_ROUTES = [
   'POST /api/invitations/:token/acceptance',
   'POST /api/password-resets/requests',
   'POST /api/password-resets',
+  'POST /api/readings/push',
 ].sort();
+
+// Public routes a device calls with a bearer token instead of a session: no CSRF, 401 without the token.
+const TOKEN_ROUTES = ['POST /api/readings/push'];
 
 const STATE_CHANGING = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 
@@ -62,11 +66,20 @@ describe('API route table', () => {
 
   it('when any state-changing route is called without the CSRF header, then it answers 403 even for an admin', async () => {
     const admin = await ApiClient.signedIn(t.app, await createUser(t.db, [...ROLES]));
-    const unsafe = routes().filter((route) => STATE_CHANGING.has(route.method));
+    const unsafe = routes().filter((route) => STATE_CHANGING.has(route.method) && !TOKEN_ROUTES.includes(`${route.method} ${route.path}`));
     expect(unsafe.length).toBeGreaterThan(5);
     for (const route of unsafe) {
       const res = await admin.send(route.method.toLowerCase() as 'post', samplePath(route.path), {}, false);
       expect({ route: `${route.method} ${route.path}`, status: res.status }).toEqual({ route: `${route.method} ${route.path}`, status: 403 });
+    }
+  });
+
+  it('when a token route is called without its token, then it answers 401 even for a signed-in admin', async () => {
+    const admin = await ApiClient.signedIn(t.app, await createUser(t.db, [...ROLES]));
+    for (const route of TOKEN_ROUTES) {
+      const [method, path] = route.split(' ');
+      const res = await admin.send(method.toLowerCase() as 'post', path, {});
+      expect({ route, status: res.status }).toEqual({ route, status: 401 });
     }
   });
 

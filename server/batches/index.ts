@@ -1,0 +1,2 @@
+export { createBatchesRouter } from './batches.routes';
+export { createBatchesService, type BatchesService } from './batches.service';

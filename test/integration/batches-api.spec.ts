@@ -1,0 +1,122 @@
+import { ApiClient } from './helpers/api-client';
+import { createFermenter, startBatch } from './helpers/batch-factory';
+import { createCatalogueEntries, sampleDesign } from './helpers/catalogue-factory';
+import { createTestApp, TestApp } from './helpers/test-app';
+import { createUser } from './helpers/user-factory';
+
+describe('Batches API', () => {
+  let t: TestApp;
+  beforeAll(() => (t = createTestApp()));
+  afterAll(async () => {
+    t.close();
+    await t.db.destroy();
+  });
+
+  const signedIn = async (roles: ('member' | 'brewer' | 'admin')[] = ['member']) => {
+    const user = await createUser(t.db, roles);
+    return { user, client: await ApiClient.signedIn(t.app, user) };
+  };
+
+  it('when a member starts a batch from a recipe version, then it copies that version’s predictions and stays planned', async () => {
+    const { client } = await signedIn();
+    const ids = await createCatalogueEntries(t.db);
+    const recipe = (await client.send('post', '/api/recipes', { design: sampleDesign(ids), visibility: 'private' })).body;
+    await client.send('put', `/api/recipes/${recipe.id}`, { design: { ...sampleDesign(ids), batchVolumeLitres: 40 } });
+    const fermenterId = await createFermenter(t.db);
+    const batch = await startBatch(client, { recipeId: recipe.id, recipeVersion: 1, fermenterId });
+    expect(batch).toMatchObject({ status: 'planned', recipeVersion: 1, fermenterId, editable: true });
+    expect(batch.predicted.batchVolumeLitres).toBe(20);
+    expect(batch.predicted.og).toBeGreaterThan(1.03);
+    // Yeast of the test catalogue: 72–78 % apparent attenuation, so 75 % expected.
+    expect(batch.predicted.yeastAttenuationPercent).toBe(75);
+    expect(batch.statusDates.planned).not.toBeNull();
+  });
+
+  it('when the fermenter is not a fermenter in service, then it answers 400 naming fermenterId and stores nothing', async () => {
+    const { client } = await signedIn();
+    const inMaintenance = await createFermenter(t.db, 'maintenance');
+    const before = await t.db('batches').count({ n: '*' });
+    const res = await client.send('post', '/api/batches', { name: 'x', recipeId: null, recipeVersion: null, brewDate: '2026-11-20', plannedVolumeLitres: 20, fermenterId: inMaintenance });
+    expect(res.status).toBe(400);
+    expect(res.body.fields).toHaveProperty('fermenterId');
+    expect(await t.db('batches').count({ n: '*' })).toEqual(before);
+  });
+
+  it('when the body is absurd, then it answers 400 naming each field', async () => {
+    const { client } = await signedIn();
+    const res = await client.send('post', '/api/batches', { name: '', recipeId: 5, recipeVersion: null, brewDate: '20.11.2026', plannedVolumeLitres: -3, fermenterId: null });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.fields).sort()).toEqual(['brewDate', 'name', 'plannedVolumeLitres', 'recipeVersion']);
+  });
+
+  it('when a move skips a step, then it asks first (409) and, confirmed, records only the reached date', async () => {
+    const { client } = await signedIn();
+    const batch = await startBatch(client);
+    const asked = await client.send('post', `/api/batches/${batch.id}/status`, { status: 'fermenting' });
+    expect(asked.status).toBe(409);
+    expect(asked.body.error.code).toBe('status-skips-steps');
+    const moved = await client.send('post', `/api/batches/${batch.id}/status`, { status: 'fermenting', confirmSkip: true, at: '2026-11-21T10:00:00+01:00' });
+    expect(moved.status).toBe(200);
+    expect(moved.body.statusDates).toMatchObject({ brewing: null, fermenting: '2026-11-21T09:00:00.000Z' });
+    const back = await client.send('post', `/api/batches/${batch.id}/status`, { status: 'brewing' });
+    expect(back.status).toBe(409);
+    const audit = await t.db('audit_log').where({ subject_type: 'batch', subject_id: batch.id, action: 'batch-status-moved' });
+    expect(audit).toHaveLength(1);
+  });
+
+  it('when a second batch moves into a fermenter another batch is fermenting in, then it answers 409', async () => {
+    const { client } = await signedIn();
+    const fermenterId = await createFermenter(t.db);
+    const first = await startBatch(client, { fermenterId });
+    const second = await startBatch(client, { fermenterId });
+    await client.send('post', `/api/batches/${first.id}/status`, { status: 'fermenting', confirmSkip: true });
+    const res = await client.send('post', `/api/batches/${second.id}/status`, { status: 'fermenting', confirmSkip: true });
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe('fermenter-busy');
+    const fermenters = (await client.get('/api/batches/fermenters')).body;
+    expect(fermenters.find((f: { id: number }) => f.id === fermenterId).heldByBatchId).toBe(first.id);
+  });
+
+  it("when another member changes someone's batch, then it answers 403; a brewer and an admin may", async () => {
+    const { client: owner } = await signedIn();
+    const batch = await startBatch(owner);
+    const { client: other } = await signedIn();
+    expect((await other.get(`/api/batches/${batch.id}`)).body.editable).toBe(false);
+    expect((await other.send('patch', `/api/batches/${batch.id}`, { name: 'Mine now' })).status).toBe(403);
+    expect((await other.send('post', `/api/batches/${batch.id}/status`, { status: 'brewing' })).status).toBe(403);
+    const { client: brewer } = await signedIn(['member', 'brewer']);
+    expect((await brewer.send('patch', `/api/batches/${batch.id}`, { name: 'Renamed by brewer' })).body.name).toBe('Renamed by brewer');
+    const { client: admin } = await signedIn(['member', 'admin']);
+    expect((await admin.send('post', `/api/batches/${batch.id}/status`, { status: 'brewing' })).status).toBe(200);
+  });
+
+  it('when a member starts a batch for someone else, then it answers 403; a brewer may', async () => {
+    const { client: member } = await signedIn();
+    const { user: other } = await signedIn();
+    const refused = await member.send('post', '/api/batches', { name: 'x', recipeId: null, recipeVersion: null, brewerId: other.id, brewDate: '2026-11-20', plannedVolumeLitres: 20, fermenterId: null });
+    expect(refused.status).toBe(403);
+    const { client: brewer } = await signedIn(['member', 'brewer']);
+    expect((await startBatch(brewer, { brewerId: other.id })).brewerId).toBe(other.id);
+  });
+
+  it('when the brew day is saved, then the measurements come back beside the predictions and the change is audited', async () => {
+    const { client } = await signedIn();
+    const batch = await startBatch(client);
+    const measured = { preBoilLitres: 26.5, preBoilGravity: 1.044, fermenterLitres: 21, originalGravity: 1.052, originalGravityTemperatureC: 20, pitchedAt: '2026-11-20T18:30:00Z' };
+    const res = await client.send('put', `/api/batches/${batch.id}/brew-day`, measured);
+    expect(res.status).toBe(200);
+    expect(res.body.measured).toEqual({ ...measured, pitchedAt: '2026-11-20T18:30:00.000Z' });
+    expect(await t.db('audit_log').where({ subject_type: 'batch', subject_id: batch.id, action: 'brew-day-saved' })).toHaveLength(1);
+  });
+
+  it("when listing my batches, then only the caller's active ones come back with their latest gravity", async () => {
+    const { client } = await signedIn();
+    const active = await startBatch(client, { name: 'Active' });
+    const archived = await startBatch(client, { name: 'Done' });
+    await client.send('post', `/api/batches/${archived.id}/status`, { status: 'archived', confirmSkip: true });
+    await client.send('post', `/api/batches/${active.id}/readings`, { measuredAt: '2026-11-21T08:00:00Z', instrument: 'logger', rawValue: 1.03, rawUnit: 'sg', sampleTemperatureC: null, calibrationTemperatureC: null });
+    const mine = (await client.get('/api/batches?mine=true')).body;
+    expect(mine.map((b: { id: number }) => b.id)).toEqual([active.id]);
+    expect(mine[0].progress).toMatchObject({ latestSg: 1.03, readingCount: 1, finished: false, stuck: false });
+  });
+});
