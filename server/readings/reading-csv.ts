@@ -62,7 +62,9 @@ export function parseReadingsCsv(text: string, map: ReadingColumnMapping, zone: 
   } catch (error) {
     return { rows: [], rowsTotal: 0, problems: [{ line: (error as { lines?: number }).lines ?? 1, reason: `the file is not valid CSV: ${(error as Error).message}` }] };
   }
-  const wanted = [map.time, map.value, map.temperature, map.instrument, map.unit].filter((c): c is string => c !== null);
+  // The temperature column is optional: a file without it has readings without a sample temperature.
+  if (map.temperature !== null && !header.includes(map.temperature)) map = { ...map, temperature: null };
+  const wanted = [map.time, map.value, map.instrument, map.unit].filter((c): c is string => c !== null);
   const missing = wanted.filter((c) => !header.includes(c));
   if (missing.length) return { rows: [], rowsTotal: records.length, problems: [{ line: 1, reason: `missing columns: ${missing.join(', ')} (the header has ${header.join(', ') || 'nothing'})` }] };
   const rows: ParsedReadingsCsv['rows'] = [];

@@ -16,16 +16,16 @@ const readingFields = {
 };
 
 /** The unit must suit the instrument and the value its unit's range. */
-function checkValue(r: { instrument?: string; rawUnit?: string; rawValue?: number }, ctx: z.RefinementCtx): void {
+function checkValue(r: { instrument?: string; rawUnit?: string; rawValue?: number }, ctx: z.RefinementCtx, names = { unit: 'rawUnit', value: 'rawValue' }): void {
   const instrument = r.instrument as keyof typeof INSTRUMENT_UNITS;
   const unit = r.rawUnit as keyof typeof L.rawValue;
   if (!INSTRUMENT_UNITS[instrument]?.includes(unit)) {
-    ctx.addIssue({ code: 'custom', path: ['rawUnit'], message: `must be one of ${INSTRUMENT_UNITS[instrument].map((u) => UNIT_LABELS[u]).join(', ')} for this instrument` });
+    ctx.addIssue({ code: 'custom', path: [names.unit], message: `must be one of ${INSTRUMENT_UNITS[instrument].map((u) => UNIT_LABELS[u]).join(', ')} for this instrument` });
     return;
   }
   const range = L.rawValue[unit];
   if (r.rawValue! < range.min || r.rawValue! > range.max) {
-    ctx.addIssue({ code: 'custom', path: ['rawValue'], message: `must be between ${range.min} and ${range.max} ${UNIT_LABELS[unit]}` });
+    ctx.addIssue({ code: 'custom', path: [names.value], message: `must be between ${range.min} and ${range.max} ${UNIT_LABELS[unit]}` });
   }
 }
 
@@ -64,7 +64,7 @@ export const pushReadingsSchema = z.object({
         value: z.number('must be a number'),
         unit: z.enum(['sg', 'plato'], 'must be sg or plato').default('sg'),
         temperatureC: between(L.sampleTemperatureC, '°C').nullable().optional(),
-      }).superRefine((r, ctx) => checkValue({ instrument: 'logger', rawUnit: r.unit, rawValue: r.value }, ctx)),
+      }).superRefine((r, ctx) => checkValue({ instrument: 'logger', rawUnit: r.unit, rawValue: r.value }, ctx, { unit: 'unit', value: 'value' })),
       'must be a list of readings',
     )
     .min(1, 'must hold at least one reading')

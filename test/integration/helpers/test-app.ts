@@ -4,6 +4,7 @@ import { Config, loadConfig } from '@server/config';
 import { createDb } from '@server/db';
 import { SignInThrottleLimits } from '@server/auth';
 import { PublicRequestLimit } from '@server/auth/public-request-limit';
+import { PushRateLimit } from '@server/readings';
 
 /** Configuration of the test database prepared by `npm test`; a clear error when run some other way. */
 export function testConfig(): Config {
@@ -20,10 +21,10 @@ export interface TestApp extends CreatedApp {
 }
 
 export function createTestApp(
-  options: { db?: Knex; signInLimits?: SignInThrottleLimits; publicRequestLimit?: PublicRequestLimit; env?: Record<string, string> } = {},
+  options: { db?: Knex; signInLimits?: SignInThrottleLimits; publicRequestLimit?: PublicRequestLimit; pushRateLimit?: PushRateLimit; env?: Record<string, string> } = {},
 ): TestApp {
   const config = options.env ? loadConfig({ ...process.env, ...options.env }) : testConfig();
   const db = options.db ?? createDb(config.db);
-  const created = createApp({ config, db, signInLimits: options.signInLimits, publicRequestLimit: options.publicRequestLimit, sessionCleanupMs: 0 });
+  const created = createApp({ config, db, signInLimits: options.signInLimits, publicRequestLimit: options.publicRequestLimit, pushRateLimit: options.pushRateLimit, sessionCleanupMs: 0 });
   return { ...created, db, config };
 }
