@@ -36,6 +36,8 @@ import { createBatchReadingsRouter, createPushRouter, createPushTokensService, c
 import { createDuesLedgerService, createDuesPaymentsService, createDuesRenewalsService, createDuesRouter, createStripeGateway, DuesRenewalsService } from './dues';
 import { createMailRouter, createMailSender, createOutboxDispatcher, createOutboxService, OutboxDispatcher } from './mail';
 import { processHolderId, startScheduler } from './scheduler/scheduler';
+import { createBookingFeedService, createBookingsRouter, createBookingsService } from './bookings';
+import { createKitRouter, createKitService } from './kit';
 
 export interface AppDeps {
   config: Config;
@@ -133,6 +135,9 @@ export function createApp({ config, db, signInLimits, publicRequestLimit, pushRa
   const duesLedger = createDuesLedgerService({ db, coopTimeZone: config.coopTimeZone, testMode: config.stripe.testMode });
   mountApi(app, '/api/dues', createDuesRouter(duesLedger, createDuesPaymentsService(duesDeps)));
   mountApi(app, '/api/admin/mail', createMailRouter(createOutboxService(db)));
+  mountApi(app, '/api/kit', createKitRouter(createKitService(db)));
+  const bookings = createBookingsService({ db, coopTimeZone: config.coopTimeZone });
+  mountApi(app, '/api/bookings', createBookingsRouter(bookings, createBookingFeedService(db, config.publicUrl)));
   app.use('/api', apiNotFound);
   app.use(createClientRouter(config.clientDist));
   app.use(errorMiddleware);

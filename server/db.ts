@@ -2,6 +2,7 @@ import knex, { Knex } from 'knex';
 import { join } from 'node:path';
 import { Config } from './config';
 import { Role } from '@shared/auth';
+import { BookingPurpose } from '@shared/bookings';
 import { KitKind, KitState } from '@shared/kit';
 import { RecipeDesign } from '@shared/recipes';
 import { BatchPrediction, BatchStatus } from '@shared/batches';
@@ -224,6 +225,42 @@ export interface GravityReadingRow {
   updated_at: Date;
 }
 
+export interface KitMaintenanceEntryRow {
+  id: number;
+  kit_item_id: number;
+  /** DATE: written as yyyy-MM-dd, read back as a Date at midnight UTC. */
+  performed_on: Date | string;
+  work: string;
+  performed_by: string;
+  next_due_on: Date | string | null;
+  recorded_by_user_id: number;
+  created_at: Date;
+}
+
+export interface BookingRow {
+  id: number;
+  kit_item_id: number;
+  user_id: number;
+  created_by_user_id: number;
+  purpose: BookingPurpose;
+  starts_at: Date;
+  ends_at: Date;
+  held_until: Date;
+  time_zone: string;
+  batch_id: number | null;
+  note: string;
+  cancelled_at: Date | null;
+  cancelled_by_user_id: number | null;
+  created_at: Date;
+  updated_at: Date;
+}
+
+export interface BookingFeedLinkRow {
+  user_id: number;
+  token_hash: string;
+  created_at: Date;
+}
+
 export interface ReadingUploadRow {
   id: number;
   batch_id: number;
@@ -281,6 +318,9 @@ declare module 'knex/types/tables' {
     reading_uploads: Knex.CompositeTableType<ReadingUploadRow, Writable<ReadingUploadRow>, Writable<ReadingUploadRow>>;
     batch_push_tokens: Knex.CompositeTableType<BatchPushTokenRow, Writable<BatchPushTokenRow>, Writable<BatchPushTokenRow>>;
     push_rate_windows: PushRateWindowRow;
+    kit_maintenance_entries: Knex.CompositeTableType<KitMaintenanceEntryRow, Omit<KitMaintenanceEntryRow, 'id' | 'created_at'>>;
+    bookings: Knex.CompositeTableType<BookingRow, Omit<BookingRow, 'id' | 'created_at' | 'updated_at' | 'cancelled_at' | 'cancelled_by_user_id'>, Partial<BookingRow>>;
+    booking_feed_links: Knex.CompositeTableType<BookingFeedLinkRow, Omit<BookingFeedLinkRow, 'created_at'>>;
     audit_log: Knex.CompositeTableType<AuditLogRow, Omit<AuditLogRow, 'id' | 'created_at' | 'detail'> & { detail: string | null }>;
   }
 }

@@ -6,6 +6,8 @@ export class AppError extends Error {
     readonly status: number,
     readonly fields?: Record<string, string>,
     readonly retryAfterSeconds?: number,
+    /** Facts the client may show beside the message, e.g. the booking a request collided with. */
+    readonly details?: Record<string, unknown>,
   ) {
     super(message);
     this.name = 'AppError';

@@ -17,6 +17,7 @@ export const errorMiddleware: ErrorRequestHandler = (err, req, res, next) => {
   if (known) {
     const body: ApiErrorBody = { error: { code: known.code, message: known.message } };
     if (known.fields) body.fields = known.fields;
+    if (known.details) body.error.details = known.details;
     if (known.retryAfterSeconds !== undefined) {
       body.error.retryAfterSeconds = known.retryAfterSeconds;
       res.set('Retry-After', String(known.retryAfterSeconds));

@@ -14,6 +14,7 @@ const PUBLIC_ROUTES = [
   'POST /api/password-resets/requests',
   'POST /api/password-resets',
   'POST /api/readings/push',
+  'GET /api/bookings/feed/:token',
 ].sort();
 
 // Public routes a device calls with a bearer token instead of a session: no CSRF, 401 without the token.

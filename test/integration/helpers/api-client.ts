@@ -17,18 +17,19 @@ export class ApiClient {
   private token = '';
   private readonly cookies = new Map<string, string>();
 
-  constructor(app: Express) {
+  /** `app` is the Express app, or the base URL of a running server process. */
+  constructor(app: Express | string) {
     this.agent = request.agent(app);
   }
 
   /** Starts an anonymous client that already holds its CSRF token. */
-  static async anonymous(app: Express): Promise<ApiClient> {
+  static async anonymous(app: Express | string): Promise<ApiClient> {
     const client = new ApiClient(app);
     await client.get('/api/auth/session');
     return client;
   }
 
-  static async signedIn(app: Express, user: TestUser): Promise<ApiClient> {
+  static async signedIn(app: Express | string, user: TestUser): Promise<ApiClient> {
     const client = await ApiClient.anonymous(app);
     const res = await client.send('post', '/api/auth/sign-in', { email: user.email, password: user.password });
     if (res.status !== 200) throw new Error(`sign-in failed for the test user: ${res.status} ${JSON.stringify(res.body)}`);

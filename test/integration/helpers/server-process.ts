@@ -7,6 +7,8 @@ const root = join(__dirname, '..', '..', '..');
 /** A real server process (`server/main.ts`, scheduler on) against the test database. */
 export interface ServerProcess {
   pid: number;
+  /** Where it listens, e.g. http://127.0.0.1:40123. */
+  baseUrl: string;
   stop(): Promise<void>;
 }
 
@@ -33,6 +35,7 @@ export async function startServerProcess(env: Record<string, string>): Promise<S
   });
   return {
     pid: child.pid!,
+    baseUrl: `http://127.0.0.1:${port}`,
     stop: () =>
       new Promise((resolve) => {
         if (child.exitCode !== null) return resolve();

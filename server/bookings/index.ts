@@ -1,0 +1,4 @@
+export { createBookingFeedService, type BookingFeedService } from './booking-feed.service';
+export { createBookingsRouter } from './bookings.routes';
+export { createBookingsService, type BookingsService, type BookingsServiceDeps } from './bookings.service';
+export { everyoneMayBook, type DuesStanding, type DuesStandingResult } from './dues-standing';

@@ -1,0 +1,38 @@
+import { KitItem, KitKind, KitState } from './kit-item';
+import { MaintenanceEntry } from './maintenance-entry';
+
+export const KIT_PATH = '/api/kit';
+
+/*
+ * Routes (roles in brackets; "any" = any signed-in person):
+ *   GET    /api/kit                               [any]    KitItemSummary[]
+ *   POST   /api/kit                               [admin]  KitItemInput → KitItem (201)
+ *   GET    /api/kit/:kitItemId                    [any]    KitItem
+ *   PATCH  /api/kit/:kitItemId                    [admin]  Partial<KitItemInput> → KitItem
+ *   GET    /api/kit/:kitItemId/maintenance        [any]    MaintenanceEntry[] (newest first)
+ *   POST   /api/kit/:kitItemId/maintenance        [admin]  MaintenanceEntryInput → MaintenanceEntry (201)
+ */
+
+export interface KitItemInput {
+  code: string;
+  name: string;
+  kind: KitKind;
+  capacityLitres: number | null;
+  state: KitState;
+  turnaroundHours: number;
+  notes: string;
+}
+
+/** An item with the next service due from its log, for the register table. */
+export interface KitItemSummary extends KitItem {
+  nextMaintenanceDueOn: string | null;
+}
+
+export interface MaintenanceEntryInput {
+  performedOn: string;
+  work: string;
+  performedBy: string;
+  nextDueOn: string | null;
+}
+
+export type { MaintenanceEntry };
