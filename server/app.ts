@@ -31,6 +31,9 @@ import { createPreferencesRouter } from './preferences/preferences.routes';
 import { createRecipesRouter, createRecipesService } from './recipes';
 import { createStylesRouter } from './styles/styles.routes';
 import { createStylesService } from './styles/styles.service';
+import { createLabRouter } from './lab/lab.routes';
+import { createToleranceClassesService } from './lab/tolerance-classes.service';
+import { createReferenceTablesRouter, createReferenceTablesService } from './reference-tables';
 import { createBatchesRouter, createBatchesService } from './batches';
 import { createBatchReadingsRouter, createPushRouter, createPushTokensService, createReadingsRouter, createReadingsService, DEFAULT_PUSH_RATE_LIMIT, PushRateLimit } from './readings';
 import { createDuesLedgerService, createDuesPaymentsService, createDuesRenewalsService, createDuesRouter, createStripeGateway, DuesRenewalsService } from './dues';
@@ -138,6 +141,8 @@ export function createApp({ config, db, signInLimits, publicRequestLimit, pushRa
   mountApi(app, '/api/kit', createKitRouter(createKitService(db)));
   const bookings = createBookingsService({ db, coopTimeZone: config.coopTimeZone });
   mountApi(app, '/api/bookings', createBookingsRouter(bookings, createBookingFeedService(db, config.publicUrl)));
+  mountApi(app, '/api/reference-tables', createReferenceTablesRouter(createReferenceTablesService(db)));
+  mountApi(app, '/api/lab', createLabRouter(createToleranceClassesService(db)));
   app.use('/api', apiNotFound);
   app.use(createClientRouter(config.clientDist));
   app.use(errorMiddleware);

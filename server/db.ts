@@ -294,6 +294,52 @@ export interface PushRateWindowRow {
 /** Values a write may give where the driver reads back a DECIMAL string. */
 type Writable<Row> = { [K in keyof Row]?: Row[K] extends Decimal | null ? number | string | null : Row[K] };
 
+export interface DensityTableRow {
+  id: number;
+  name: string;
+  /** DECIMAL columns come back as strings. */
+  temperature_c: string;
+  resolution: string;
+  uploaded_by_user_id: number;
+  created_at: Date;
+}
+
+export interface DensityTableRowRow {
+  id: number;
+  density_table_id: number;
+  line: number;
+  mass_percent: string;
+  density: string;
+}
+
+export interface DensityTableCorrectionRow {
+  id: number;
+  density_table_row_id: number;
+  density: string;
+  note: string;
+  corrected_by_user_id: number;
+  created_at: Date;
+}
+
+export interface LabSettingsRow {
+  id: number;
+  density_table_id: number | null;
+  updated_by_user_id: number | null;
+  updated_at: Date;
+}
+
+export interface ToleranceClassRow {
+  id: number;
+  name: string;
+  tolerance_percent_volume: string;
+  note: string;
+  retired: number | boolean;
+  created_at: Date;
+  updated_at: Date;
+}
+
+type NumericInsert<Row, Keys extends keyof Row> = Omit<Row, Keys> & { [K in Keys]: number };
+
 declare module 'knex/types/tables' {
   interface Tables {
     users: Knex.CompositeTableType<UserRow, Omit<UserRow, 'id' | 'created_at' | 'updated_at' | 'password_reset_requested_at' | 'unit_system'>, Partial<UserRow>>;
@@ -321,6 +367,11 @@ declare module 'knex/types/tables' {
     kit_maintenance_entries: Knex.CompositeTableType<KitMaintenanceEntryRow, Omit<KitMaintenanceEntryRow, 'id' | 'created_at'>>;
     bookings: Knex.CompositeTableType<BookingRow, Omit<BookingRow, 'id' | 'created_at' | 'updated_at' | 'cancelled_at' | 'cancelled_by_user_id'>, Partial<BookingRow>>;
     booking_feed_links: Knex.CompositeTableType<BookingFeedLinkRow, Omit<BookingFeedLinkRow, 'created_at'>>;
+    density_tables: Knex.CompositeTableType<DensityTableRow, Omit<NumericInsert<DensityTableRow, 'temperature_c' | 'resolution'>, 'id' | 'created_at'>>;
+    density_table_rows: Knex.CompositeTableType<DensityTableRowRow, Omit<NumericInsert<DensityTableRowRow, 'mass_percent' | 'density'>, 'id'>>;
+    density_table_corrections: Knex.CompositeTableType<DensityTableCorrectionRow, Omit<NumericInsert<DensityTableCorrectionRow, 'density'>, 'id' | 'created_at'>>;
+    lab_settings: Knex.CompositeTableType<LabSettingsRow, Omit<LabSettingsRow, 'updated_at'>, Partial<LabSettingsRow>>;
+    tolerance_classes: Knex.CompositeTableType<ToleranceClassRow, Omit<NumericInsert<ToleranceClassRow, 'tolerance_percent_volume'>, 'id' | 'created_at' | 'updated_at' | 'retired'>, Partial<Omit<ToleranceClassRow, 'tolerance_percent_volume'>> & { tolerance_percent_volume?: number }>;
     audit_log: Knex.CompositeTableType<AuditLogRow, Omit<AuditLogRow, 'id' | 'created_at' | 'detail'> & { detail: string | null }>;
   }
 }

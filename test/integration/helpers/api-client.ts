@@ -47,6 +47,14 @@ export class ApiClient {
     return this.remember(await (body ? req.send(body) : req));
   }
 
+  /** A multipart POST with form fields and one file, as a browser's upload form sends it. */
+  async upload(path: string, fields: Record<string, string>, file: { field?: string; name: string; content: string | Buffer; contentType?: string }): Promise<request.Response> {
+    let req = this.agent.post(path).set(CSRF_HEADER, this.token);
+    for (const [name, value] of Object.entries(fields)) req = req.field(name, value);
+    req = req.attach(file.field ?? 'file', Buffer.from(file.content), { filename: file.name, contentType: file.contentType ?? 'text/csv' });
+    return this.remember(await req);
+  }
+
   /** The cookies this client holds, as a Cookie header (to replay them against another app instance). */
   cookieHeader(): string {
     return [...this.cookies].map(([name, value]) => `${name}=${value}`).join('; ');

@@ -1,0 +1,2 @@
+export { createReferenceTablesRouter } from './reference-tables.routes';
+export { createReferenceTablesService, type ReferenceTablesService } from './reference-tables.service';

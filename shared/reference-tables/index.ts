@@ -1,0 +1,3 @@
+export * from './reference-tables-api';
+export * from './builtin-density-table';
+export * from './audit-curve';

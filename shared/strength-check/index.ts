@@ -1,0 +1,2 @@
+export * from './strength-conversion';
+export * from './tolerance-classes-api';
