@@ -21,6 +21,16 @@ export const routes: Routes = [
       { path: 'today', title: 'Today · Commonwort', loadChildren: () => import('./today/today.routes').then((m) => m.todayRoutes) },
       { path: 'recipes', title: 'Recipes · Commonwort', loadChildren: () => import('./recipes/recipes.routes').then((m) => m.recipesRoutes) },
       {
+        path: 'strength-check',
+        title: 'Strength check · Commonwort',
+        loadChildren: () => import('./strength-check/strength-check.routes').then((m) => m.strengthCheckRoutes),
+      },
+      {
+        path: 'reference-tables',
+        title: 'Reference tables · Commonwort',
+        loadChildren: () => import('./reference-tables/reference-tables.routes').then((m) => m.referenceTablesRoutes),
+      },
+      {
         path: 'members',
         title: 'Members · Commonwort',
         canActivate: [roleGuard(['admin'])],

@@ -38,12 +38,12 @@ describe('Shell', () => {
     expect(element.querySelectorAll('main')).toHaveLength(1);
   });
 
-  it('lists Today and Recipes in the navigation of a member', async () => {
-    expect(navLabels(await render(['member']))).toEqual(['Today', 'Recipes']);
+  it('lists the built areas open to everyone in the navigation of a member', async () => {
+    expect(navLabels(await render(['member']))).toEqual(['Today', 'Recipes', 'Strength check', 'Reference tables']);
   });
 
   it('adds Members to the navigation of an admin', async () => {
-    expect(navLabels(await render(['member', 'admin']))).toEqual(['Today', 'Recipes', 'Members']);
+    expect(navLabels(await render(['member', 'admin']))).toEqual(['Today', 'Recipes', 'Strength check', 'Reference tables', 'Members']);
   });
 
   it('dispatches Sign Out Clicked from the account menu', async () => {

@@ -30,17 +30,17 @@ describe('TodayPage', () => {
     expect([...element.querySelectorAll('cw-role-badge')].map((badge) => badge.textContent?.trim())).toEqual(['member', 'brewer']);
   });
 
-  it('shows a member only the Recipes card, the one other area open to them so far', async () => {
+  it('shows a member the cards of the other built areas open to everyone', async () => {
     const element = await render(['member']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/strength-check', '/reference-tables']);
   });
 
   it('shows a Members card linking to /members for an admin', async () => {
     const element = await render(['member', 'admin']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/members']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/strength-check', '/reference-tables', '/members']);
   });
 });
