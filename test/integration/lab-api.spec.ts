@@ -37,6 +37,6 @@ describe('Lab API: tolerance classes', () => {
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.fields)).toEqual(['tolerancePercentVolume']);
     expect((await admin.send('post', '/api/lab/tolerance-classes', { name, tolerancePercentVolume: 1 })).status).toBe(409);
-    expect(Number((await t.db('tolerance_classes').where({ id: created.body.id }).first()).tolerance_percent_volume)).toBe(1);
+    expect(Number((await t.db('tolerance_classes').where({ id: created.body.id }).first())!.tolerance_percent_volume)).toBe(1);
   });
 });

@@ -39,7 +39,7 @@ describe('Reference tables API', () => {
     expect(res.body.audit.flagged).toEqual([]);
     const corrected = res.body.rows.find((r: { id: number }) => r.id === row.id);
     expect(corrected).toMatchObject({ uploadedDensity: row.uploadedDensity, correctedDensity: suggested, correctionNote: 'typo in print' });
-    expect(Number((await t.db('density_table_rows').where({ id: row.id }).first()).density)).toBe(row.uploadedDensity);
+    expect(Number((await t.db('density_table_rows').where({ id: row.id }).first())!.density)).toBe(row.uploadedDensity);
     expect(await t.db('audit_log').where({ action: 'density-table-row-corrected', subject_id: table.id }).count({ n: '*' })).toEqual([{ n: 1 }]);
   });
 
