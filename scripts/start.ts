@@ -1,7 +1,9 @@
 import { Server } from 'node:http';
 import { join } from 'node:path';
 import { Knex } from 'knex';
+import pino from 'pino';
 import { createApp } from '../server/app';
+import { installProcessSafetyNet } from '../server/errors/process-safety-net';
 import { loadConfig } from '../server/config';
 import { DEMO_MEMBERS, DEMO_PASSWORD } from '../seeds/01_demo_coop_members';
 import { ensureDatabaseAndUser, openMigratedDb, seed } from './setup/app-database';
@@ -71,7 +73,9 @@ async function main(): Promise<void> {
     await seed(knex);
     buildClientIfStale(root, config.clientDist);
     step('Starting the web server');
-    const created = createApp({ config, db: knex, runScheduler: true });
+    const logger = pino({ level: config.logLevel });
+    installProcessSafetyNet(logger);
+    const created = createApp({ config, db: knex, logger, runScheduler: true });
     closeApp = created.close;
     server = await listen(created.app, config.port, config.host);
     done('Ready');

@@ -1,9 +1,8 @@
 import compression from 'compression';
 import express, { Express } from 'express';
-import helmet from 'helmet';
 import { Knex } from 'knex';
 import { randomUUID } from 'node:crypto';
-import pino from 'pino';
+import pino, { Logger } from 'pino';
 import pinoHttp from 'pino-http';
 import {
   createAuthRouter,
@@ -15,12 +14,14 @@ import {
   csrfProtection,
   SignInThrottleLimits,
 } from './auth';
-import { PublicRequestLimit } from './auth/public-request-limit';
 import { createClientRouter } from './client/serve-client';
 import { Config } from './config';
 import { apiNotFound, errorMiddleware } from './errors/error-middleware';
 import { createHealthRouter } from './health/health.routes';
+import { startHousekeeping } from './housekeeping/housekeeping';
 import { mountApi } from './http/api-mount';
+import { securityHeaders } from './http/security-headers';
+import { wellFormedBody } from './http/well-formed-body';
 import { createInvitationsRouter, createInvitationsService } from './invitations';
 import { createMembersRouter, createMembersService } from './members';
 import { createPasswordResetsRouter, createPasswordResetsService } from './password-resets';
@@ -28,6 +29,8 @@ import { createBrewhouseRouter } from './brewhouse/brewhouse.routes';
 import { createCatalogueRouter } from './catalogue/catalogue.routes';
 import { createCatalogueService } from './catalogue/catalogue.service';
 import { createPreferencesRouter } from './preferences/preferences.routes';
+import { limitPerAddress } from './rate-limits/limit-per-address';
+import { RateLimit } from './rate-limits/rate-limiter';
 import { createRecipesRouter, createRecipesService } from './recipes';
 import { createStylesRouter } from './styles/styles.routes';
 import { createStylesService } from './styles/styles.service';
@@ -46,14 +49,15 @@ export interface AppDeps {
   config: Config;
   db: Knex;
   signInLimits?: SignInThrottleLimits;
-  /** Cap on anonymous password-reset requests per address. */
-  publicRequestLimit?: PublicRequestLimit;
+  /** Cap per address on each public route that looks up a token or hashes a password (reset, invitation acceptance). */
+  publicRequestLimit?: RateLimit;
   /** Cap on logger pushes per token and address. */
   pushRateLimit?: PushRateLimit;
-  /** Interval of the expired-session sweep; 0 turns it off (tests). */
+  /** Interval of the sweep of expired sessions and counters; 0 turns it off (tests). */
   sessionCleanupMs?: number;
   /** Runs the outbox, renewal and reminder jobs inside this process (the server does; most tests call them directly). */
   runScheduler?: boolean;
+  logger?: Logger;
 }
 
 /** The app and what must be closed with it. */
@@ -64,53 +68,38 @@ export interface CreatedApp {
   close(): void;
 }
 
-const contentSecurityPolicy = {
-  useDefaults: false,
-  directives: {
-    'default-src': ["'self'"],
-    'script-src': ["'self'"],
-    'script-src-attr': ["'none'"],
-    // Angular and Material set component styles at run time.
-    'style-src': ["'self'", "'unsafe-inline'"],
-    'font-src': ["'self'"],
-    'img-src': ["'self'", 'data:'],
-    'connect-src': ["'self'"],
-    'object-src': ["'none'"],
-    'base-uri': ["'self'"],
-    'form-action': ["'self'"],
-    'frame-ancestors': ["'none'"],
-  },
-};
+export const DEFAULT_PUBLIC_REQUEST_LIMIT: RateLimit = { points: 20, windowSeconds: 15 * 60 };
+
+function requestLogger(logger: Logger) {
+  return pinoHttp({
+    logger,
+    genReqId: (_req, res) => {
+      const id = randomUUID();
+      res.setHeader('X-Request-Id', id);
+      return id;
+    },
+    // One short line per request: no headers, so no cookies in the log.
+    serializers: {
+      req: (req: { id: string; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+      res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+    },
+  });
+}
 
 /** Builds the Express app: API routers under /api, the built client, one error handler last. */
-export function createApp({ config, db, signInLimits, publicRequestLimit, pushRateLimit = DEFAULT_PUSH_RATE_LIMIT, sessionCleanupMs = 15 * 60 * 1000, runScheduler = false }: AppDeps): CreatedApp {
+export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAULT_PUBLIC_REQUEST_LIMIT, pushRateLimit = DEFAULT_PUSH_RATE_LIMIT, sessionCleanupMs = 15 * 60 * 1000, runScheduler = false, ...deps }: AppDeps): CreatedApp {
   const app = express();
+  const logger = deps.logger ?? pino({ level: config.logLevel });
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
-  const logger = pino({ level: config.logLevel });
-  app.use(
-    pinoHttp({
-      logger,
-      genReqId: (_req, res) => {
-        const id = randomUUID();
-        res.setHeader('X-Request-Id', id);
-        return id;
-      },
-      // One short line per request: no headers, so no cookies in the log.
-      serializers: {
-        req: (req: { id: string; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
-        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
-      },
-    }),
-  );
-  app.use(helmet({ contentSecurityPolicy }));
+  app.use(requestLogger(logger));
+  app.use(securityHeaders());
   app.use(compression());
-  app.use('/api', express.json({ limit: '100kb' }));
+  app.use('/api', express.json({ limit: '100kb' }), wellFormedBody);
 
   const hasher = createPasswordHasher(config.bcryptCost);
   const auth = createAuthService(db, hasher);
   const passport = createPassport(auth);
-  const sessions = createSessionMiddleware(db, config.sessionSecret, sessionCleanupMs);
   const invitations = createInvitationsService({ db, hasher, publicUrl: config.publicUrl });
   const resets = createPasswordResetsService({ db, hasher, publicUrl: config.publicUrl });
 
@@ -118,13 +107,14 @@ export function createApp({ config, db, signInLimits, publicRequestLimit, pushRa
   const pushTokens = createPushTokensService(db);
   const readings = createReadingsService(db);
 
+  // Health first: it answers (database down) even when sessions cannot be read.
   mountApi(app, '/api/health', createHealthRouter(db));
   // Loggers push with a token of their own: no session, no CSRF, so this sits before both.
   mountApi(app, '/api/readings/push', createPushRouter(pushTokens, db, pushRateLimit));
-  app.use('/api', sessions.middleware, passport.session(), csrfProtection);
-  mountApi(app, '/api/auth', createAuthRouter({ auth, passport, throttle: createSignInThrottle(signInLimits), coopTimeZone: config.coopTimeZone }));
-  mountApi(app, '/api/invitations', createInvitationsRouter(invitations));
-  mountApi(app, '/api/password-resets', createPasswordResetsRouter(resets, publicRequestLimit));
+  app.use('/api', createSessionMiddleware(db, config.sessionSecret), passport.session(), csrfProtection);
+  mountApi(app, '/api/auth', createAuthRouter({ auth, passport, throttle: createSignInThrottle(db, signInLimits), coopTimeZone: config.coopTimeZone }));
+  mountApi(app, '/api/invitations', createInvitationsRouter(invitations, limitPerAddress(db, 'invitation-acceptance', publicRequestLimit)));
+  mountApi(app, '/api/password-resets', createPasswordResetsRouter(resets, limitPerAddress(db, 'password-reset', publicRequestLimit)));
   mountApi(app, '/api/members', createMembersRouter(createMembersService(db, invitations), resets));
   mountApi(app, '/api/preferences', createPreferencesRouter(db));
   mountApi(app, '/api/ingredients', createCatalogueRouter(createCatalogueService(db)));
@@ -164,12 +154,13 @@ export function createApp({ config, db, signInLimits, publicRequestLimit, pushRa
         ],
       })
     : null;
+  const stopHousekeeping = startHousekeeping(db, sessionCleanupMs, (err) => logger.warn({ err }, 'housekeeping failed; trying again later'));
   return {
     app,
     jobs,
     close: () => {
       scheduler?.stop();
-      sessions.close();
+      stopHousekeeping();
     },
   };
 }

@@ -20,4 +20,13 @@ describe('loadConfig', () => {
     expect(() => loadConfig({ ...minimal, COOP_TIME_ZONE: 'Mars/Olympus' })).toThrow(/COOP_TIME_ZONE/);
     expect(loadConfig({ ...minimal, COOP_TIME_ZONE: 'Europe/Dublin' }).coopTimeZone).toBe('Europe/Dublin');
   });
+
+  it('when TRUST_PROXY is a hop count or a list of addresses, then exactly those proxies are trusted; true is refused', () => {
+    expect(loadConfig(minimal).trustProxy).toBe(false);
+    expect(loadConfig({ ...minimal, TRUST_PROXY: '1' }).trustProxy).toBe(1);
+    expect(loadConfig({ ...minimal, TRUST_PROXY: '10.0.0.5, 10.1.0.0/16,loopback' }).trustProxy).toEqual(['10.0.0.5', '10.1.0.0/16', 'loopback']);
+    expect(() => loadConfig({ ...minimal, TRUST_PROXY: 'true' })).toThrow(/TRUST_PROXY/);
+    expect(() => loadConfig({ ...minimal, TRUST_PROXY: '10.0.0.300' })).toThrow(/TRUST_PROXY/);
+    expect(() => loadConfig({ ...minimal, TRUST_PROXY: '10.0.0.0/33' })).toThrow(/TRUST_PROXY/);
+  });
 });

@@ -1,10 +1,6 @@
 import { IANAZone } from 'luxon';
 import { z } from 'zod';
-
-const booleanFlag = z
-  .enum(['true', 'false', '1', '0'])
-  .default('false')
-  .transform((value) => value === 'true' || value === '1');
+import { TrustProxy, trustProxySchema } from './trust-proxy';
 
 const configSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
@@ -19,7 +15,7 @@ const configSchema = z.object({
   SESSION_SECRET: z.string().min(32, 'at least 32 characters'),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
-  TRUST_PROXY: booleanFlag,
+  TRUST_PROXY: trustProxySchema,
   CLIENT_DIST: z.string().default('dist/commonwort/browser'),
   COOP_TIME_ZONE: z
     .string()
@@ -48,7 +44,8 @@ export interface Config {
   sessionSecret: string;
   bcryptCost: number;
   logLevel: string;
-  trustProxy: boolean;
+  /** Proxies believed about the client's address: a hop count or their addresses (see trust-proxy.ts). */
+  trustProxy: TrustProxy;
   clientDist: string;
   /** Wall-clock zone of the co-op: bookings, brew days and readings are entered and shown in it. */
   coopTimeZone: string;

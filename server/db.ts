@@ -385,6 +385,8 @@ export function knexConfig(db: Config['db']): Knex.Config {
     client: 'mysql2',
     connection: { ...db, charset: 'utf8mb4', timezone: 'Z', dateStrings: false },
     pool: { min: 0, max: 10 },
+    // While the database is down a request waits at most this long for a connection, then gets a 503.
+    acquireConnectionTimeout: 10_000,
     migrations: { directory: MIGRATIONS_DIR, loadExtensions: ['.ts'], tableName: 'knex_migrations' },
     seeds: { directory: SEEDS_DIR, loadExtensions: ['.ts'] },
   };

@@ -40,13 +40,10 @@ export function createAuthRouter(deps: { auth: AuthService; passport: AppPasspor
   router.post('/sign-in', publicRoute, async (req, res) => {
     const { email } = parseRequest(signInSchema, req.body);
     const ip = req.ip ?? 'unknown';
-    await deps.throttle.assertAllowed(email, ip);
+    await deps.throttle.admit(email, ip);
     req.body.email = email;
     const user = await authenticateLocal(deps.passport, req, res);
-    if (!user) {
-      await deps.throttle.recordFailure(email, ip);
-      throw new AppError('invalid-credentials', 'That e-mail and password do not match an active account.', 401);
-    }
+    if (!user) throw new AppError('invalid-credentials', 'That e-mail and password do not match an active account.', 401);
     await deps.throttle.recordSuccess(email, ip);
     await logIn(req, res, user);
     await deps.auth.recordSignIn(user, ip);

@@ -17,7 +17,10 @@ export function createAuthService(db: Knex, hasher: PasswordHasher) {
       const found = await usersRepository.findCredentials(db, email);
       if (!found) return hasher.verifyNothing(password).then(() => null);
       const matches = await hasher.verify(password, found.passwordHash);
-      return matches && found.user.active ? toSessionUser(found.user) : null;
+      if (!matches || !found.user.active) return null;
+      // Brings hashes made at an older cost up to the current one, so every check costs the same.
+      if (hasher.needsRehash(found.passwordHash)) await usersRepository.update(db, found.user.id, { password_hash: await hasher.hash(password) });
+      return toSessionUser(found.user);
     },
 
     /** The session's person, re-read on every request so role changes and deactivation apply at once. */

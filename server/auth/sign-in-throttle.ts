@@ -1,49 +1,43 @@
-import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
+import { Knex } from 'knex';
 import { AppError } from '../errors/app-error';
+import { createRateLimiter } from '../rate-limits/rate-limiter';
 
-/** Limits on failed sign-ins: per account and address, and per address over all accounts. */
+/** Limits on password checks: per account and address, and per address over all accounts. */
 export interface SignInThrottleLimits {
   perAccountAndAddress: number;
-  perAddress: number;
   windowSeconds: number;
+  /** Looser and much shorter than the account limit, so others' failures behind one NAT block a member briefly at most. */
+  perAddress: number;
+  addressWindowSeconds: number;
 }
 
-export const DEFAULT_SIGN_IN_LIMITS: SignInThrottleLimits = { perAccountAndAddress: 5, perAddress: 50, windowSeconds: 15 * 60 };
+export const DEFAULT_SIGN_IN_LIMITS: SignInThrottleLimits = { perAccountAndAddress: 5, windowSeconds: 15 * 60, perAddress: 30, addressWindowSeconds: 60 };
 
-function tooMany(retryMs: number): AppError {
-  const retryAfterSeconds = Math.max(1, Math.ceil(retryMs / 1000));
+function tooMany(retryAfterSeconds: number): AppError {
   const minutes = Math.ceil(retryAfterSeconds / 60);
-  return new AppError(
-    'too-many-attempts',
-    `Too many failed sign-ins. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`,
-    429,
-    undefined,
-    retryAfterSeconds,
-  );
+  return new AppError('too-many-attempts', `Too many sign-in attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`, 429, undefined, retryAfterSeconds);
 }
 
-/** Counts failed sign-ins and refuses further tries with 429 and a retry time. */
-export function createSignInThrottle(limits: SignInThrottleLimits = DEFAULT_SIGN_IN_LIMITS) {
-  const byAccount = new RateLimiterMemory({ points: limits.perAccountAndAddress, duration: limits.windowSeconds });
-  const byAddress = new RateLimiterMemory({ points: limits.perAddress, duration: limits.windowSeconds });
+/**
+ * Counts every password check before it is made (atomically, in the database), so however many
+ * requests arrive at once and at however many server processes, no more checks run than allowed.
+ */
+export function createSignInThrottle(db: Knex, limits: SignInThrottleLimits = DEFAULT_SIGN_IN_LIMITS) {
+  const byAddress = createRateLimiter(db, 'sign-in-address', { points: limits.perAddress, windowSeconds: limits.addressWindowSeconds });
+  const byAccount = createRateLimiter(db, 'sign-in-account', { points: limits.perAccountAndAddress, windowSeconds: limits.windowSeconds });
   const accountKey = (email: string, ip: string) => `${email.toLowerCase()}|${ip}`;
 
   return {
-    /** Throws 429 when either limit is already used up. */
-    async assertAllowed(email: string, ip: string): Promise<void> {
-      for (const [limiter, key, max] of [
-        [byAccount, accountKey(email, ip), limits.perAccountAndAddress],
-        [byAddress, ip, limits.perAddress],
-      ] as const) {
-        const state = await limiter.get(key);
-        if (state && state.consumedPoints >= max) throw tooMany(state.msBeforeNext);
-      }
+    /** Counts one password check; throws 429 with a retry time when either limit is used up. */
+    async admit(email: string, ip: string): Promise<void> {
+      const address = await byAddress.consume(ip);
+      if (!address.allowed) throw tooMany(address.retryAfterSeconds);
+      const account = await byAccount.consume(accountKey(email, ip));
+      if (!account.allowed) throw tooMany(account.retryAfterSeconds);
     },
-    async recordFailure(email: string, ip: string): Promise<void> {
-      await Promise.all([byAccount.penalty(accountKey(email, ip)), byAddress.penalty(ip)]).catch((res: RateLimiterRes) => res);
-    },
+    /** A right password: the account's count starts again. */
     async recordSuccess(email: string, ip: string): Promise<void> {
-      await byAccount.delete(accountKey(email, ip));
+      await byAccount.reset(accountKey(email, ip));
     },
   };
 }

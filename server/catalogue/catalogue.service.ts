@@ -1,14 +1,22 @@
 import { Knex } from 'knex';
+import { z } from 'zod';
 import { CatalogueImportResult, IngredientCatalogue, IngredientKind } from '@shared/recipes';
 import { recordAudit } from '../audit/audit-log';
+import { transactionWithRetry } from '../db-retry';
 import { AppError } from '../errors/app-error';
 import { parseRequest } from '../http/parse-request';
 import { parseCatalogueCsv } from './catalogue-csv';
-import { CATALOGUE_KINDS } from './catalogue-kinds';
+import { CATALOGUE_KINDS, CatalogueKind } from './catalogue-kinds';
 import { catalogueRepository } from './catalogue.repository';
 
 function isDuplicate(error: unknown): boolean {
   return (error as { code?: string }).code === 'ER_DUP_ENTRY';
+}
+
+/** A change names only fields of its kind (checked whole after merging) and may retire the entry. */
+function patchSchemaOf(spec: CatalogueKind) {
+  const fields = Object.fromEntries(Object.keys(spec.columns).map((field) => [field, z.unknown()]));
+  return z.object({ ...fields, retired: z.boolean('must be true or false').optional() }).strict();
 }
 
 const nameTaken = () => new AppError('name-taken', 'The catalogue already has an entry with this name.', 409, { name: 'is already in the catalogue' });
@@ -40,24 +48,25 @@ export function createCatalogueService(db: Knex) {
       return (await catalogueRepository.findById(db, spec, id))!;
     },
 
-    /** Changes some fields and/or retires; the merged entry is validated whole. */
+    /** Changes some fields and/or retires; unknown fields are refused, the merged entry is validated whole, and only validated changes are audited with the update. */
     async update(actorId: number, kind: IngredientKind, id: number, body: Record<string, unknown>): Promise<Record<string, unknown>> {
       const spec = CATALOGUE_KINDS[kind];
+      const { retired, ...changes } = parseRequest(patchSchemaOf(spec), body);
       const existing = await catalogueRepository.findById(db, spec, id);
       if (!existing) throw new AppError('ingredient-not-found', 'No catalogue entry has this id.', 404);
-      const { retired, ...changes } = body;
-      if (retired !== undefined && typeof retired !== 'boolean') {
-        throw new AppError('validation-failed', 'Please check these fields: retired.', 400, { retired: 'must be true or false' });
-      }
       const { id: _id, retired: _retired, ...current } = existing;
       const merged = parseRequest(spec.schema, { ...current, ...changes });
+      const audited: Record<string, unknown> = Object.fromEntries(Object.keys(changes).map((field) => [field, merged[field]]));
+      if (retired !== undefined) audited.retired = retired;
       try {
-        await catalogueRepository.update(db, spec, id, merged, retired as boolean | undefined);
+        await transactionWithRetry(db, async (trx) => {
+          await catalogueRepository.update(trx, spec, id, merged, retired);
+          await recordAudit(trx, { actorUserId: actorId, action: 'ingredient-changed', subjectType: spec.table, subjectId: id, detail: audited });
+        });
       } catch (error) {
         if (isDuplicate(error)) throw nameTaken();
         throw error;
       }
-      await recordAudit(db, { actorUserId: actorId, action: 'ingredient-changed', subjectType: spec.table, subjectId: id, detail: body });
       return (await catalogueRepository.findById(db, spec, id))!;
     },
 

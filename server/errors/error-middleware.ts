@@ -1,6 +1,7 @@
 import { ErrorRequestHandler, RequestHandler } from 'express';
 import { ApiErrorBody } from '@shared/api';
 import { AppError } from './app-error';
+import { isDatabaseUnavailable } from './database-errors';
 
 /** Body-parser failures carry a `type`; they are the caller's fault, not ours. */
 function clientFault(err: { type?: string; status?: number }): AppError | null {
@@ -10,10 +11,16 @@ function clientFault(err: { type?: string; status?: number }): AppError | null {
   return null;
 }
 
-/** The one error handler, registered last: AppError → its status; anything else → a logged 500. */
+/** The database is down or overloaded: operational, the client may try again shortly. */
+const databaseUnavailable = () =>
+  new AppError('service-unavailable', 'The service cannot reach its database just now. Please try again in a minute.', 503, undefined, 5);
+
+/** The one error handler, registered last: AppError → its status; database outages → 503; anything else → a logged 500. */
 export const errorMiddleware: ErrorRequestHandler = (err, req, res, next) => {
   if (res.headersSent) return next(err);
-  const known = err instanceof AppError ? err : clientFault(err);
+  const outage = isDatabaseUnavailable(err);
+  if (outage) req.log?.warn({ err }, 'database unavailable');
+  const known = err instanceof AppError ? err : outage ? databaseUnavailable() : clientFault(err);
   if (known) {
     const body: ApiErrorBody = { error: { code: known.code, message: known.message } };
     if (known.fields) body.fields = known.fields;

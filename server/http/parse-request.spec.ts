@@ -25,8 +25,17 @@ describe('parseRequest', () => {
   });
 });
 
+describe('parseRequest with a strict schema', () => {
+  it('when the body has unknown keys, then each is named as not a known field', () => {
+    const strict = z.object({ name: z.string() }).strict();
+    expect(() => parseRequest(strict, { name: 'x', extra: 1, deep: { a: 1 } })).toThrow(
+      expect.objectContaining({ status: 400, fields: { extra: 'is not a known field', deep: 'is not a known field' } }),
+    );
+  });
+});
+
 describe('parseId', () => {
-  it.each(['0', '-3', '1.5', 'abc', ''])('when the id is %p, then it throws a 400 naming the parameter', (raw) => {
+  it.each(['0', '-3', '1.5', 'abc', '', '0x10', '1e3', '1 ', ' 1', '+1', '01', '99999999999999999'])('when the id is %p, then it throws a 400 naming the parameter', (raw) => {
     expect(() => parseId(raw, 'memberId')).toThrow(expect.objectContaining({ status: 400, fields: { memberId: 'must be a positive whole number' } }));
   });
 

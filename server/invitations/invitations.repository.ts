@@ -51,6 +51,13 @@ export const invitationsRepository = {
     await pending(db, now).where({ email }).update({ revoked_at: now });
   },
 
+  /** Withdraws pending invitations sent by the person or to their address (on deactivation). */
+  async revokePendingOf(db: Knex, userId: number, email: string, now: Date): Promise<void> {
+    await pending(db, now)
+      .where((q) => q.where({ invited_by_user_id: userId }).orWhere({ email }))
+      .update({ revoked_at: now });
+  },
+
   async update(db: Knex, id: number, changes: Partial<Pick<InvitationRow, 'accepted_at' | 'revoked_at'>>): Promise<void> {
     await db('invitations').where({ id }).update(changes);
   },

@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { RequestHandler, Router } from 'express';
 import { SessionResponse } from '@shared/auth';
 import { logIn } from '../auth/auth.routes';
 import { publicRoute, requireRole } from '../auth/route-access';
@@ -13,8 +13,8 @@ function parseToken(value: unknown): string {
   return result.data;
 }
 
-/** /api/invitations: officers invite; the invited person previews and accepts (public, by token). */
-export function createInvitationsRouter(invitations: InvitationsService): Router {
+/** /api/invitations: officers invite; the invited person previews and accepts (public, by token, capped per address). */
+export function createInvitationsRouter(invitations: InvitationsService, perAddress: RequestHandler): Router {
   const router = Router();
 
   router.post('/', requireRole('admin'), async (req, res) => {
@@ -31,7 +31,7 @@ export function createInvitationsRouter(invitations: InvitationsService): Router
     res.json(await invitations.preview(parseToken(req.params.token)));
   });
 
-  router.post('/:token/acceptance', publicRoute, async (req, res) => {
+  router.post('/:token/acceptance', publicRoute, perAddress, async (req, res) => {
     const request = parseRequest(acceptInvitationSchema, req.body);
     const user = await invitations.accept(parseToken(req.params.token), request);
     await logIn(req, res, user);

@@ -57,11 +57,16 @@ export function createInvitationsService(deps: { db: Knex; hasher: PasswordHashe
       return { email: row.email, roles: row.roles, expiresAt: row.expires_at.toISOString() };
     },
 
-    /** Turns the invitation into an account; the row lock makes a double submit create one account only. */
+    /**
+     * Turns the invitation into an account; the row lock makes a double submit create one account only.
+     * The token is checked before the password is hashed, so made-up tokens cost no hashing.
+     */
     async accept(token: string, request: AcceptInvitationRequest): Promise<SessionUser> {
+      const tokenHash = hashOneTimeToken(token);
+      if (!(await invitationsRepository.findPendingByTokenHash(db, tokenHash, now()))) throw invitationNotFound();
       const passwordHash = await hasher.hash(request.password);
       const userId = await db.transaction(async (trx) => {
-        const row = await invitationsRepository.findPendingByTokenHash(trx, hashOneTimeToken(token), now(), true);
+        const row = await invitationsRepository.findPendingByTokenHash(trx, tokenHash, now(), true);
         if (!row) throw invitationNotFound();
         if (await usersRepository.emailTaken(trx, row.email)) throw invitationNotFound();
         const id = await usersRepository.create(trx, { email: row.email, name: request.name, passwordHash, roles: row.roles });

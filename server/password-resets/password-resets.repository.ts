@@ -9,14 +9,25 @@ export const passwordResetsRepository = {
     await db('password_resets').insert(row);
   },
 
-  async lockUsable(trx: Knex.Transaction, tokenHash: string, now: Date): Promise<PasswordResetRow | null> {
-    const row = await trx('password_resets')
-      .where({ token_hash: tokenHash })
-      .whereNull('used_at')
-      .where('expires_at', '>', now)
-      .forUpdate()
-      .first();
+  /** The unused, unexpired reset of an active member behind a token; locked when `lock` (inside a transaction). */
+  async findUsable(db: Knex, tokenHash: string, now: Date, lock = false): Promise<PasswordResetRow | null> {
+    const query = db('password_resets')
+      .join('users', 'users.id', 'password_resets.user_id')
+      .where('password_resets.token_hash', tokenHash)
+      .where('users.active', true)
+      .whereNull('password_resets.used_at')
+      .where('password_resets.expires_at', '>', now)
+      .select('password_resets.*');
+    const row = await (lock ? query.forUpdate() : query).first();
     return row ?? null;
+  },
+
+  /** Spends every unused link for the member or issued by them (on deactivation). */
+  async withdrawFor(db: Knex, userId: number, now: Date): Promise<void> {
+    await db('password_resets')
+      .whereNull('used_at')
+      .where((q) => q.where({ user_id: userId }).orWhere({ issued_by_user_id: userId }))
+      .update({ used_at: now });
   },
 
   async markUsed(db: Knex, id: number, now: Date): Promise<void> {

@@ -1,7 +1,6 @@
-import { Router } from 'express';
+import { RequestHandler, Router } from 'express';
 import { z } from 'zod';
 import { emailField, newPasswordField } from '../auth/auth.schemas';
-import { createPublicRequestLimit, PublicRequestLimit } from '../auth/public-request-limit';
 import { publicRoute } from '../auth/route-access';
 import { parseRequest } from '../http/parse-request';
 import { PasswordResetsService } from './password-resets.service';
@@ -13,9 +12,8 @@ const completeSchema = z.object({
 });
 
 /** /api/password-resets: public, by design; the answers never reveal whether an e-mail is known. */
-export function createPasswordResetsRouter(resets: PasswordResetsService, limit?: PublicRequestLimit): Router {
+export function createPasswordResetsRouter(resets: PasswordResetsService, perAddress: RequestHandler): Router {
   const router = Router();
-  const perAddress = createPublicRequestLimit(limit);
 
   router.post('/requests', publicRoute, perAddress, async (req, res) => {
     const { email } = parseRequest(requestSchema, req.body);

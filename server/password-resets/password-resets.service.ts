@@ -11,6 +11,8 @@ import { passwordResetsRepository } from './password-resets.repository';
 
 const RESET_HOURS = 24;
 
+const resetLinkInvalid = () => new AppError('reset-link-invalid', 'This reset link is not valid: it may have expired or been used.', 404);
+
 /** Forgotten passwords: a request mails the member a one-time link (and is noted for the officers, who can also hand out a link). */
 export function createPasswordResetsService(deps: { db: Knex; hasher: PasswordHasher; publicUrl: string; now?: () => Date }) {
   const { db, hasher } = deps;
@@ -46,12 +48,17 @@ export function createPasswordResetsService(deps: { db: Knex; hasher: PasswordHa
       return { link: `${deps.publicUrl}/reset-password/${token}`, expiresAt: expiresAt.toISOString() };
     },
 
-    /** Sets the new password, spends the token and ends the member's other sessions. */
+    /**
+     * Sets the new password, spends the token and ends the member's other sessions. The token (and
+     * that its member is still active) is checked before hashing, so made-up tokens cost no hashing.
+     */
     async complete(token: string, password: string): Promise<void> {
+      const tokenHash = hashOneTimeToken(token);
+      if (!(await passwordResetsRepository.findUsable(db, tokenHash, now()))) throw resetLinkInvalid();
       const passwordHash = await hasher.hash(password);
       await db.transaction(async (trx) => {
-        const row = await passwordResetsRepository.lockUsable(trx, hashOneTimeToken(token), now());
-        if (!row) throw new AppError('reset-link-invalid', 'This reset link is not valid: it may have expired or been used.', 404);
+        const row = await passwordResetsRepository.findUsable(trx, tokenHash, now(), true);
+        if (!row) throw resetLinkInvalid();
         await usersRepository.update(trx, row.user_id, { password_hash: passwordHash, password_reset_requested_at: null });
         await passwordResetsRepository.markUsed(trx, row.id, now());
         await passwordResetsRepository.endSessionsOf(trx, row.user_id);

@@ -6,7 +6,7 @@ import { createUser } from './helpers/user-factory';
 
 describe('Sign-in API', () => {
   let t: TestApp;
-  beforeAll(() => (t = createTestApp({ signInLimits: { perAccountAndAddress: 3, perAddress: 1000, windowSeconds: 600 } })));
+  beforeAll(() => (t = createTestApp({ signInLimits: { perAccountAndAddress: 3, windowSeconds: 600, perAddress: 1000, addressWindowSeconds: 60 } })));
   afterAll(async () => {
     t.close();
     await t.db.destroy();

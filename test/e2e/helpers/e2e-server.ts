@@ -20,7 +20,9 @@ export async function startE2eServer(): Promise<E2eServer> {
   const config = loadConfig({ ...process.env, PORT: String(port), HOST: '127.0.0.1' });
   if (!existsSync(join(config.clientDist, 'index.html'))) throw new Error(`No built app in ${config.clientDist}: run them with \`npm test\`, which builds it.`);
   const db = createDb(config.db);
-  const { app, close } = createApp({ config, db, sessionCleanupMs: 0 });
+  // Browser journeys all come from 127.0.0.1 and share the database's counters: a loose address limit.
+  const signInLimits = { perAccountAndAddress: 5, windowSeconds: 900, perAddress: 10_000, addressWindowSeconds: 60 };
+  const { app, close } = createApp({ config, db, sessionCleanupMs: 0, signInLimits, publicRequestLimit: { points: 10_000, windowSeconds: 60 } });
   const server: HttpServer = await new Promise((resolve) => {
     const s = app.listen(port, '127.0.0.1', () => resolve(s));
   });

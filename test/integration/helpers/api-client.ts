@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { Express } from 'express';
+import { randomInt } from 'node:crypto';
 import { CSRF_COOKIE, CSRF_HEADER } from '@server/auth';
 import { TestUser } from './user-factory';
 
@@ -11,26 +12,38 @@ function cookieValue(res: request.Response, name: string): string | undefined {
   return cookie ? decodeURIComponent(cookie.split(';')[0].slice(name.length + 1)) : undefined;
 }
 
-/** A browser-like caller: keeps cookies and echoes the CSRF token as Angular's HttpClient does. */
+/** A private address of its own for each client (sent as X-Forwarded-For; the test app trusts one proxy hop). */
+export function randomClientAddress(): string {
+  return `10.${randomInt(256)}.${randomInt(256)}.${randomInt(1, 255)}`;
+}
+
+/** An app in this process, or the base URL of a server process. */
+export type ApiTarget = Express | string;
+
+/**
+ * A browser-like caller: keeps cookies and echoes the CSRF token as Angular's HttpClient does.
+ * Each client comes from its own address, so per-address limits of one test never reach another.
+ */
 export class ApiClient {
   readonly agent: ReturnType<typeof request.agent>;
   private token = '';
   private readonly cookies = new Map<string, string>();
 
   /** `app` is the Express app, or the base URL of a running server process. */
-  constructor(app: Express | string) {
+  constructor(app: ApiTarget, readonly address = randomClientAddress()) {
     this.agent = request.agent(app);
+    this.agent.set('X-Forwarded-For', address);
   }
 
   /** Starts an anonymous client that already holds its CSRF token. */
-  static async anonymous(app: Express | string): Promise<ApiClient> {
-    const client = new ApiClient(app);
+  static async anonymous(app: ApiTarget, address?: string): Promise<ApiClient> {
+    const client = new ApiClient(app, address);
     await client.get('/api/auth/session');
     return client;
   }
 
-  static async signedIn(app: Express | string, user: TestUser): Promise<ApiClient> {
-    const client = await ApiClient.anonymous(app);
+  static async signedIn(app: ApiTarget, user: TestUser, address?: string): Promise<ApiClient> {
+    const client = await ApiClient.anonymous(app, address);
     const res = await client.send('post', '/api/auth/sign-in', { email: user.email, password: user.password });
     if (res.status !== 200) throw new Error(`sign-in failed for the test user: ${res.status} ${JSON.stringify(res.body)}`);
     return client;

@@ -3,15 +3,21 @@ import { createApp, CreatedApp } from '@server/app';
 import { Config, loadConfig } from '@server/config';
 import { createDb } from '@server/db';
 import { SignInThrottleLimits } from '@server/auth';
+<<<<<<< HEAD
 import { PublicRequestLimit } from '@server/auth/public-request-limit';
 import { PushRateLimit } from '@server/readings';
+=======
+import { RateLimit } from '@server/rate-limits/rate-limiter';
+>>>>>>> 2762985 (Throttles and per-address caps counted in database rows before the work; sessions only for signed-in people, in a store that survives outages; strict ids, well-formed bodies, equal-work password checks)
 
 /** Configuration of the test database prepared by `npm test`; a clear error when run some other way. */
 export function testConfig(): Config {
   if (!process.env.DB_PASSWORD) {
     throw new Error('Integration tests need the private test database: run them with `npm test` (or `npm test -- --selectProjects integration`).');
   }
-  return loadConfig(process.env);
+  // One trusted proxy hop: each ApiClient sends its own X-Forwarded-For address, so the per-address
+  // limits (counted in the shared database) of one test never reach another.
+  return { ...loadConfig(process.env), trustProxy: 1 };
 }
 
 /** The real app on the real test database; `close()` releases both. */
@@ -21,9 +27,13 @@ export interface TestApp extends CreatedApp {
 }
 
 export function createTestApp(
+<<<<<<< HEAD
   options: { db?: Knex; signInLimits?: SignInThrottleLimits; publicRequestLimit?: PublicRequestLimit; pushRateLimit?: PushRateLimit; env?: Record<string, string> } = {},
+=======
+  options: { db?: Knex; signInLimits?: SignInThrottleLimits; publicRequestLimit?: RateLimit; env?: Record<string, string> } = {},
+>>>>>>> 2762985 (Throttles and per-address caps counted in database rows before the work; sessions only for signed-in people, in a store that survives outages; strict ids, well-formed bodies, equal-work password checks)
 ): TestApp {
-  const config = options.env ? loadConfig({ ...process.env, ...options.env }) : testConfig();
+  const config = options.env ? { ...loadConfig({ ...process.env, ...options.env }), trustProxy: 1 } : testConfig();
   const db = options.db ?? createDb(config.db);
   const created = createApp({ config, db, signInLimits: options.signInLimits, publicRequestLimit: options.publicRequestLimit, pushRateLimit: options.pushRateLimit, sessionCleanupMs: 0 });
   return { ...created, db, config };
