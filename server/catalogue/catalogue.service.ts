@@ -15,7 +15,7 @@ function isDuplicate(error: unknown): boolean {
 
 /** A change names only fields of its kind (checked whole after merging) and may retire the entry. */
 function patchSchemaOf(spec: CatalogueKind) {
-  const fields = Object.fromEntries(Object.keys(spec.columns).map((field) => [field, z.unknown()]));
+  const fields = Object.fromEntries(Object.keys(spec.columns).map((field) => [field, z.unknown().optional()]));
   return z.object({ ...fields, retired: z.boolean('must be true or false').optional() }).strict();
 }
 

@@ -1,0 +1,67 @@
+import request from 'supertest';
+import { purgeExpiredRows } from '@server/housekeeping/housekeeping';
+import { ApiClient } from './helpers/api-client';
+import { createTestApp, TestApp } from './helpers/test-app';
+import { createUser } from './helpers/user-factory';
+
+describe('HTTP edges: proxies, headers, static files, sessions', () => {
+  let t: TestApp;
+  beforeAll(() => (t = createTestApp({ publicRequestLimit: { points: 3, windowSeconds: 600 } })));
+  afterAll(async () => {
+    t.close();
+    await t.db.destroy();
+  });
+
+  const sessionCount = async () => Number((await t.db('sessions').count({ n: '*' }))[0].n);
+
+  it('when a client forges earlier X-Forwarded-For entries, then only the hop the trusted proxy added counts as its address', async () => {
+    const realAddress = '10.200.1.1';
+    const forged = (i: number) => request(t.app).post('/api/password-resets/requests').set('X-Forwarded-For', `203.0.113.${i}, ${realAddress}`);
+    const guest = new ApiClient(t.app, realAddress);
+    const statuses: number[] = [];
+    for (let i = 0; i < 5; i++) {
+      const res = await forged(i).set('X-XSRF-TOKEN', 'x'.repeat(32)).set('Cookie', `XSRF-TOKEN=${'x'.repeat(32)}`).send({ email: 'a@test.example' });
+      statuses.push(res.status);
+    }
+    expect(guest.address).toBe(realAddress);
+    expect(statuses).toEqual([202, 202, 202, 429, 429]);
+  });
+
+  it('when the request came over plain http, then no HSTS header is sent; over https through the trusted proxy it is', async () => {
+    const plain = await request(t.app).get('/api/health');
+    const secure = await request(t.app).get('/api/health').set('X-Forwarded-Proto', 'https');
+    expect(plain.headers['strict-transport-security']).toBeUndefined();
+    expect(secure.headers['strict-transport-security']).toMatch(/max-age=\d+/);
+  });
+
+  it('when a file with an extension does not exist, then it answers 404, not the app page', async () => {
+    const res = await request(t.app).get('/does-not-exist.js');
+    expect(res.status).toBe(404);
+    expect(res.text).not.toMatch(/<html/i);
+    expect((await request(t.app).get('/recipes/12')).status).not.toBe(404);
+  });
+
+  it('when 50 anonymous visitors probe the session and fetch a token, then no session rows are stored, yet their sign-ins pass the CSRF check', async () => {
+    const before = await sessionCount();
+    await Promise.all(Array.from({ length: 50 }, () => request(t.app).get('/api/auth/session')));
+    expect(await sessionCount()).toBe(before);
+    const user = await createUser(t.db);
+    const client = await ApiClient.anonymous(t.app);
+    expect((await client.send('post', '/api/auth/sign-in', { email: user.email, password: user.password })).status).toBe(200);
+    expect((await client.send('post', '/api/auth/sign-in', { email: user.email, password: user.password }, false)).status).toBe(403);
+  });
+
+  it('when an anonymous request echoes no token or a different one, then it is refused with 403', async () => {
+    const client = await ApiClient.anonymous(t.app);
+    const res = await client.agent.post('/api/auth/sign-in').set('X-XSRF-TOKEN', 'y'.repeat(32)).send({ email: 'a@test.example', password: 'x' });
+    expect(res.status).toBe(403);
+  });
+
+  it('when sessions have expired, then the housekeeping purge deletes them and keeps live ones', async () => {
+    const live = await ApiClient.signedIn(t.app, await createUser(t.db));
+    await t.db('sessions').insert({ sid: `expired-${Date.now()}`, sess: JSON.stringify({ cookie: {} }), expired: new Date(Date.now() - 1000) });
+    await purgeExpiredRows(t.db);
+    expect(await t.db('sessions').where('expired', '<=', new Date())).toHaveLength(0);
+    expect((await live.get('/api/auth/session')).body.user).not.toBeNull();
+  });
+});
