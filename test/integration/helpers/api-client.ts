@@ -68,6 +68,11 @@ export class ApiClient {
     return this.remember(await req);
   }
 
+  /** The CSRF token this client echoes. */
+  csrfToken(): string {
+    return this.token;
+  }
+
   /** The cookies this client holds, as a Cookie header (to replay them against another app instance). */
   cookieHeader(): string {
     return [...this.cookies].map(([name, value]) => `${name}=${value}`).join('; ');

@@ -35,15 +35,27 @@ function alive(pid: number): boolean {
   }
 }
 
+/** Runs set-up steps without their console lines (they would fill the test report). */
+async function quietly<T>(work: () => Promise<T>): Promise<T> {
+  const log = jest.spyOn(console, 'log').mockImplementation(() => {});
+  try {
+    return await work();
+  } finally {
+    log.mockRestore();
+  }
+}
+
 /** Starts (or reuses) `.data/<name>`, with a fresh migrated database holding no people. */
 export async function startIsolatedDatabase(name: string): Promise<IsolatedDatabase> {
   const home = join(root, '.data', name);
   const port = await freePort();
-  let server: PrivateMariaDb = await startPrivateMariaDb({ home, port });
+  let server: PrivateMariaDb = await quietly(() => startPrivateMariaDb({ home, port }));
   const base = testConfig();
   const config: Config = { ...base, db: { ...base.db, port: server.port, database: 'commonwort_isolated' } };
-  ensureDatabaseAndUser(server, config.db, true);
-  const knex = await openMigratedDb(config.db);
+  const knex = await quietly(async () => {
+    ensureDatabaseAndUser(server, config.db, true);
+    return openMigratedDb(config.db);
+  });
   return {
     config,
     knex,
@@ -54,10 +66,10 @@ export async function startIsolatedDatabase(name: string): Promise<IsolatedDatab
       while (alive(pid)) await new Promise((resolve) => setTimeout(resolve, 20));
     },
     async restart() {
-      server = await startPrivateMariaDb({ home, port: server.port });
+      server = await quietly(() => startPrivateMariaDb({ home, port: server.port }));
     },
     stop() {
-      server.stop();
+      void quietly(async () => server.stop());
     },
   };
 }
