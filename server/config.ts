@@ -2,6 +2,11 @@ import { IANAZone } from 'luxon';
 import { z } from 'zod';
 import { TrustProxy, trustProxySchema } from './trust-proxy';
 
+const booleanFlag = z
+  .enum(['true', 'false', '1', '0'])
+  .default('false')
+  .transform((value) => value === 'true' || value === '1');
+
 const configSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   HOST: z.string().min(1).default('127.0.0.1'),

@@ -20,7 +20,7 @@ describe('Two server processes on one database', () => {
   let servers: ServerProcess[];
   beforeAll(async () => {
     t = createTestApp();
-    servers = await Promise.all([startServerProcess(t.config), startServerProcess(t.config)]);
+    servers = await Promise.all([startServerProcess(), startServerProcess()]);
   }, 60_000);
   afterAll(async () => {
     await Promise.all((servers ?? []).map((server) => server.stop()));
