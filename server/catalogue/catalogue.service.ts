@@ -2,7 +2,7 @@ import { Knex } from 'knex';
 import { z } from 'zod';
 import { CatalogueImportResult, IngredientCatalogue, IngredientKind } from '@shared/recipes';
 import { recordAudit } from '../audit/audit-log';
-import { transactionWithRetry } from '../db-retry';
+import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { AppError } from '../errors/app-error';
 import { parseRequest } from '../http/parse-request';
 import { parseCatalogueCsv } from './catalogue-csv';

@@ -2,7 +2,7 @@ import { Knex } from 'knex';
 import { Role } from '@shared/auth';
 import { Member, MemberListResponse, UpdateMemberRequest } from '@shared/members';
 import { recordAudit } from '../audit/audit-log';
-import { transactionWithRetry } from '../db-retry';
+import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { AppError } from '../errors/app-error';
 import { invitationsRepository } from '../invitations/invitations.repository';
 import { InvitationsService } from '../invitations/invitations.service';

@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { Knex } from 'knex';
-import { transactionWithRetry } from '../db-retry';
+import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { requestCountersRepository } from './request-counters.repository';
 
 /** How many requests of one kind a key (an address, an account) may make in a window. */

@@ -1,9 +1,9 @@
 import { Knex } from 'knex';
 
 const RETRYABLE = new Set(['ER_LOCK_DEADLOCK', 'ER_LOCK_WAIT_TIMEOUT']);
-const ATTEMPTS = 3;
+const ATTEMPTS = 5;
 
-/** Runs `work` in a transaction, again (up to three times) when MariaDB picks it as a deadlock victim. */
+/** Runs `work` in a transaction, again (up to five times) when MariaDB picks it as a deadlock victim. */
 export async function transactionWithRetry<T>(db: Knex, work: (trx: Knex.Transaction) => Promise<T>): Promise<T> {
   for (let attempt = 1; ; attempt++) {
     try {

@@ -3,12 +3,8 @@ import { createApp, CreatedApp } from '@server/app';
 import { Config, loadConfig } from '@server/config';
 import { createDb } from '@server/db';
 import { SignInThrottleLimits } from '@server/auth';
-<<<<<<< HEAD
-import { PublicRequestLimit } from '@server/auth/public-request-limit';
 import { PushRateLimit } from '@server/readings';
-=======
 import { RateLimit } from '@server/rate-limits/rate-limiter';
->>>>>>> 2762985 (Throttles and per-address caps counted in database rows before the work; sessions only for signed-in people, in a store that survives outages; strict ids, well-formed bodies, equal-work password checks)
 
 /** Configuration of the test database prepared by `npm test`; a clear error when run some other way. */
 export function testConfig(): Config {
@@ -27,11 +23,7 @@ export interface TestApp extends CreatedApp {
 }
 
 export function createTestApp(
-<<<<<<< HEAD
-  options: { db?: Knex; signInLimits?: SignInThrottleLimits; publicRequestLimit?: PublicRequestLimit; pushRateLimit?: PushRateLimit; env?: Record<string, string> } = {},
-=======
-  options: { db?: Knex; signInLimits?: SignInThrottleLimits; publicRequestLimit?: RateLimit; env?: Record<string, string> } = {},
->>>>>>> 2762985 (Throttles and per-address caps counted in database rows before the work; sessions only for signed-in people, in a store that survives outages; strict ids, well-formed bodies, equal-work password checks)
+  options: { db?: Knex; signInLimits?: SignInThrottleLimits; publicRequestLimit?: RateLimit; pushRateLimit?: PushRateLimit; env?: Record<string, string> } = {},
 ): TestApp {
   const config = options.env ? { ...loadConfig({ ...process.env, ...options.env }), trustProxy: 1 } : testConfig();
   const db = options.db ?? createDb(config.db);
