@@ -2,6 +2,7 @@
 // measured in the same run, so results compare across machines.
 import { ethanolWaterDensity, massFractionFromDensity, strengthBreakdown } from '@shared/science';
 import { evaluateOimlPolynomial } from '@shared/science/ethanol-water/oiml-density';
+import { runApiBench } from './bench/api-bench';
 
 const SAMPLES = 4096;
 // Short rounds, cases interleaved, best round kept: the machine is shared, and the best round is
@@ -65,3 +66,13 @@ function main(): void {
 }
 
 main();
+// The API part needs its own MariaDB; `npm run bench -- --science` skips it.
+if (!process.argv.includes('--science')) {
+  runApiBench().then(
+    () => process.exit(0),
+    (error) => {
+      console.error(error);
+      process.exit(1);
+    },
+  );
+}
