@@ -1,4 +1,7 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import request from 'supertest';
+import { createApp } from '@server/app';
 import { purgeExpiredRows } from '@server/housekeeping/housekeeping';
 import { ApiClient } from './helpers/api-client';
 import { createTestApp, TestApp } from './helpers/test-app';
@@ -63,5 +66,22 @@ describe('HTTP edges: proxies, headers, static files, sessions', () => {
     await purgeExpiredRows(t.db);
     expect(await t.db('sessions').where('expired', '<=', new Date())).toHaveLength(0);
     expect((await live.get('/api/auth/session')).body.user).not.toBeNull();
+  });
+
+  it('when the app page is served, then its root element carries the nonce that the style policy allows, and no inline style sheet is allowed otherwise', async () => {
+    const dist = join(__dirname, '..', '..', 'test-results', 'csp-test-client');
+    mkdirSync(dist, { recursive: true });
+    writeFileSync(join(dist, 'index.html'), '<!doctype html><html><body><cw-root></cw-root></body></html>');
+    const withClient = createApp({ config: { ...t.config, clientDist: dist }, db: t.db, sessionCleanupMs: 0 });
+    const first = await request(withClient.app).get('/recipes');
+    const second = await request(withClient.app).get('/recipes');
+    withClient.close();
+
+    const policy = String(first.headers['content-security-policy']);
+    const nonce = /style-src 'self' 'nonce-([^']+)'/.exec(policy)?.[1];
+    expect(nonce).toBeDefined();
+    expect(first.text).toContain(`<cw-root ngCspNonce="${nonce}">`);
+    expect(policy).not.toMatch(/style-src(-elem)? [^;]*unsafe-inline/);
+    expect(second.headers['content-security-policy']).not.toContain(nonce);
   });
 });
