@@ -70,6 +70,8 @@ export async function startBenchServers(): Promise<BenchServers> {
         await new Promise((resolve) => server.close(resolve));
       }
       created.close();
+      // Let requests the load generator left in flight finish before the pool goes.
+      await new Promise((resolve) => setTimeout(resolve, 1000));
       await db.destroy();
       mariadb.stop();
     },
