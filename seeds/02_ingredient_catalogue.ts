@@ -3,7 +3,7 @@ import type { Knex } from 'knex';
 // A starter catalogue with generic descriptive names. Extract yields, colours, alpha acids and
 // attenuation ranges are typical figures of the trade (common practice), rounded; a co-op edits them
 // to match what it buys. Entries that already exist (by name) are left as they are.
-const FERMENTABLES = [
+export const FERMENTABLES = [
   ['Pale malt, 2-row', 'grain', 80, 2, 100],
   ['Pilsner malt', 'grain', 81, 1.6, 100],
   ['Pale ale malt', 'grain', 80, 3, 100],
@@ -22,7 +22,7 @@ const FERMENTABLES = [
   ['Dark candy syrup', 'sugar', 78, 80, 15],
 ] as const;
 
-const HOPS = [
+export const HOPS = [
   ['High-alpha bittering hop', 13, 'pellet'],
   ['English aroma hop', 5, 'pellet'],
   ['Citrus aroma hop', 10, 'pellet'],
@@ -30,7 +30,7 @@ const HOPS = [
   ['Floral aroma hop, whole cone', 4.5, 'whole'],
 ] as const;
 
-const YEASTS = [
+export const YEASTS = [
   ['Clean ale yeast', 73, 80, 15, 22, 'medium'],
   ['English ale yeast', 65, 72, 17, 21, 'high'],
   ['Lager yeast', 73, 77, 9, 13, 'medium'],

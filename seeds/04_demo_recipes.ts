@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import { RecipeDesign } from '../shared/recipes';
 
 // Demo recipes of the invented co-op, one for each demo batch; amounts are invented for the demo.
-interface DemoRecipe {
+export interface DemoRecipe {
   owner: string;
   style: string;
   visibility: 'private' | 'coop';
@@ -14,7 +14,7 @@ interface DemoRecipe {
 
 const mash = (temperatureC: number) => [{ name: 'Saccharification rest', temperatureC, minutes: 60 }];
 
-const DEMO_RECIPES: DemoRecipe[] = [
+export const DEMO_RECIPES: DemoRecipe[] = [
   {
     owner: 'priya@fernhollow.example',
     style: 'Pale ale',
@@ -29,7 +29,7 @@ const DEMO_RECIPES: DemoRecipe[] = [
     style: 'Strong dark ale',
     visibility: 'coop',
     design: { name: 'Lantern Strong Dark', batchVolumeLitres: 20, mashEfficiencyPercent: 68, boilMinutes: 90, mashSteps: mash(65), notes: 'Demo recipe (invented).' },
-    fermentables: [['Pale ale malt', 7.2], ['Munich malt', 1], ['Crystal malt 120 °L', 0.45], ['Chocolate malt', 0.3], ['Roasted barley', 0.12], ['Dark candy syrup', 0.6]],
+    fermentables: [['Pale ale malt', 6.8], ['Munich malt', 1], ['Crystal malt 120 °L', 0.35], ['Chocolate malt', 0.22], ['Roasted barley', 0.08], ['Dark candy syrup', 0.6]],
     hops: [['High-alpha bittering hop', 32, 60, 'boil'], ['English aroma hop', 30, 15, 'boil']],
     yeast: 'High-gravity ale yeast',
   },
@@ -38,7 +38,7 @@ const DEMO_RECIPES: DemoRecipe[] = [
     style: 'Mild',
     visibility: 'private',
     design: { name: 'Hearthside Mild', batchVolumeLitres: 23, mashEfficiencyPercent: 72, boilMinutes: 60, mashSteps: mash(68), notes: 'Demo recipe (invented).' },
-    fermentables: [['Pale ale malt', 2.7], ['Crystal malt 60 °L', 0.3], ['Chocolate malt', 0.13], ['Flaked oats', 0.2]],
+    fermentables: [['Pale ale malt', 3.1], ['Crystal malt 60 °L', 0.3], ['Chocolate malt', 0.13], ['Flaked oats', 0.2]],
     hops: [['English aroma hop', 28, 60, 'boil'], ['English aroma hop', 12, 15, 'boil']],
     yeast: 'English ale yeast',
   },

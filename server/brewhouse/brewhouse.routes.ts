@@ -16,6 +16,7 @@ const settingsSchema = z.object({
   mashThicknessLitresPerKg: z.number('must be a number').min(1.5, 'must be at least 1.5 L/kg').max(8, 'must be at most 8 L/kg'),
   grainTemperatureC: z.number('must be a number').min(-10).max(45),
   mashTunHeatCapacityKjPerK: amount(100, 'kJ/K').nullable(),
+  kettleCapacityLitres: z.number('must be a number').positive('must be more than 0').max(2000, 'must be at most 2000 L').nullable().default(null),
 });
 
 /** /api/brewhouse: read by everyone, set by brewers and admins. */

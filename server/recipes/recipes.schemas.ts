@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { HOP_USES, RECIPE_VISIBILITIES } from '@shared/recipes';
+import { HOP_USES, hopTimeProblem, MAX_HOP_TIME, RECIPE_VISIBILITIES } from '@shared/recipes';
 
 const positive = (max: number, unit: string) =>
   z.number('must be a number').positive('must be more than 0').max(max, `must be at most ${max} ${unit}`);
@@ -21,7 +21,7 @@ export const recipeDesignSchema = z
           .object({
             hopId: id,
             amountGrams: positive(10000, 'g'),
-            time: within(0, 300, '(min, or days for dry hop)'),
+            time: within(0, MAX_HOP_TIME, '(min, or days for dry hop)'),
             use: z.enum(HOP_USES, `must be one of ${HOP_USES.join(', ')}`),
           })
           .strict(),
@@ -45,7 +45,13 @@ export const recipeDesignSchema = z
       .max(10, 'at most 10 mash steps'),
     notes: z.string('must be text').max(5000, 'must be at most 5000 characters'),
   })
-  .strict();
+  .strict()
+  .superRefine((design, context) => {
+    design.hops.forEach((hop, index) => {
+      const problem = hopTimeProblem(hop, design.boilMinutes);
+      if (problem) context.addIssue({ code: 'custom', path: ['hops', index, 'time'], message: problem });
+    });
+  });
 
 export const createRecipeSchema = z.object({ design: recipeDesignSchema, visibility: z.enum(RECIPE_VISIBILITIES).default('private') });
 export const saveRecipeSchema = z.object({ design: recipeDesignSchema });

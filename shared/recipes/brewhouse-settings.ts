@@ -10,6 +10,8 @@ export interface BrewhouseSettings {
   grainTemperatureC: number;
   /** Heat capacity of the mash tun in kJ/K when measured; null to leave it out of the heat balance. */
   mashTunHeatCapacityKjPerK: number | null;
+  /** Brim-full volume of the kettle, L; null while unknown. The water plan warns when the pre-boil wort would not fit. */
+  kettleCapacityLitres: number | null;
 }
 
 /** Sensible settings for a small electric kettle, used until the co-op sets its own (common practice). */
@@ -21,4 +23,5 @@ export const DEFAULT_BREWHOUSE_SETTINGS: BrewhouseSettings = {
   mashThicknessLitresPerKg: 3,
   grainTemperatureC: 18,
   mashTunHeatCapacityKjPerK: null,
+  kettleCapacityLitres: null,
 };

@@ -11,3 +11,4 @@ export * from './recipe-units';
 export * from './scale-recipe';
 export * from './recipe-test-data';
 export * from './catalogue-csv-columns';
+export * from './hop-timing';

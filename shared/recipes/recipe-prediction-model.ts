@@ -30,7 +30,14 @@ export interface RecipeWaterPlan {
   spargeLitres: number;
   strikeTemperatureC: number;
   preBoilLitres: number;
+  /** Gravity before the boil, from the OG's extract in the kettle's wort. */
   preBoilGravity: number;
+  /** Extract in the kettle over the mashed kinds' potential, implied by the brewhouse efficiency. */
+  mashEfficiencyPercent: number;
+  /** From the brewhouse settings; null while unknown. */
+  kettleCapacityLitres: number | null;
+  /** The pre-boil volume does not fit the kettle. */
+  exceedsKettle: boolean;
 }
 
 /** Everything the editor predicts for a design; a figure is null while its inputs are missing. */

@@ -107,7 +107,7 @@ describe('predictRecipe', () => {
     const prediction = predictRecipe(generateMockDesign(), catalogue, MOCK_BREWHOUSE);
 
     const plan = brewhouseVolumes(
-      { batchLitres: 20, grainKilograms: 4.5, boilMinutes: 60, boilOffLitresPerHour: 4, grainAbsorptionLitresPerKg: 1, kettleLossLitres: 1.5, fermenterLossLitres: 1, mashRatioLitresPerKg: 3 },
+      { batchLitres: 20, grainKilograms: 4.5, boilMinutes: 60, boilOffLitresPerHour: 4, grainAbsorptionLitresPerKg: 1, kettleLossLitres: 1.5, fermenterLossLitres: 0, mashRatioLitresPerKg: 3 },
       prediction.og!,
     );
     expect(prediction.waterPlan).toEqual({
@@ -116,6 +116,9 @@ describe('predictRecipe', () => {
       strikeTemperatureC: strikeWaterTemperature(66, 18, 3),
       preBoilLitres: plan.preBoilLitres,
       preBoilGravity: plan.preBoilGravity,
+      mashEfficiencyPercent: (72 * 21.5) / 20,
+      kettleCapacityLitres: null,
+      exceedsKettle: false,
     });
   });
 

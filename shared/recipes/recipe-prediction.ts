@@ -3,6 +3,8 @@ import {
   bitternessRatio,
   brewhouseVolumes,
   finalGravityFromAttenuation,
+  hopStandIbu,
+  mashEfficiencyFromBrewhouse,
   moreyColourMetric,
   originalGravityMetric,
   ScienceRangeError,
@@ -11,13 +13,14 @@ import {
   tinsethIbu,
 } from '@shared/science';
 import { BrewhouseSettings } from './brewhouse-settings';
+import { HOP_STAND_TEMPERATURE_C, hopTimeProblem } from './hop-timing';
 import { Fermentable, FermentableKind, IngredientCatalogue } from './ingredient';
-import { HopItem, HopUse, RecipeDesign } from './recipe-design';
+import { HopItem, RecipeDesign } from './recipe-design';
 import { FermentableShare, HopBitterness, RecipePrediction, RecipeWaterPlan } from './recipe-prediction-model';
 import { compareFiguresToStyle, StyleTargetComparison } from './style-comparison';
 import { StyleTarget } from './style-target';
 
-/** Kinds whose extract comes from the mash, so the mash efficiency applies to them. */
+/** Kinds whose extract comes from the mash, so the brewhouse efficiency applies to them. */
 export const MASHED_KINDS: readonly FermentableKind[] = ['grain', 'adjunct'];
 
 /** Runs one figure's calculation; a refused input becomes a problem in words instead of a figure. */
@@ -47,7 +50,8 @@ function billOf(design: RecipeDesign, catalogue: IngredientCatalogue, problems: 
   });
 }
 
-// Efficiency applies to mashed kinds only: their yield is taken times the efficiency and the rest at 100 %.
+// The design's efficiency is the brewhouse efficiency into the fermenter: the share of the mashed kinds'
+// extract that reaches the batch volume. Other kinds dissolve whole.
 function originalGravity(bill: BillItem[], design: RecipeDesign): number {
   const fermentables = bill.map(({ entry, amountKg }) => ({
     kilograms: amountKg,
@@ -56,10 +60,19 @@ function originalGravity(bill: BillItem[], design: RecipeDesign): number {
   return originalGravityMetric(fermentables, 100, design.batchVolumeLitres);
 }
 
-/** Minutes of boil a hop addition sees: first-wort hops the whole boil; whirlpool and dry hops none (left out of Tinseth). */
-function boilMinutesOf(hop: HopItem, boilMinutes: number): number {
-  const byUse: Record<HopUse, number> = { 'first wort': boilMinutes, boil: Math.min(hop.time, boilMinutes), whirlpool: 0, 'dry hop': 0 };
-  return byUse[hop.use];
+/** IBU of one addition: Tinseth in the boil (first wort for the whole boil), a hop stand below it, none from dry hops. */
+function additionIbu(hop: HopItem, alphaPercent: number, og: number, design: RecipeDesign): number {
+  const addition = (minutes: number) => ({ grams: hop.amountGrams, alphaPercent, minutes });
+  switch (hop.use) {
+    case 'first wort':
+      return tinsethIbu(addition(design.boilMinutes), og, design.batchVolumeLitres);
+    case 'boil':
+      return tinsethIbu(addition(hop.time), og, design.batchVolumeLitres);
+    case 'whirlpool':
+      return hopStandIbu(addition(hop.time), og, design.batchVolumeLitres, HOP_STAND_TEMPERATURE_C);
+    default:
+      return 0;
+  }
 }
 
 function bitterness(design: RecipeDesign, catalogue: IngredientCatalogue, og: number, problems: string[]): HopBitterness[] {
@@ -69,8 +82,12 @@ function bitterness(design: RecipeDesign, catalogue: IngredientCatalogue, og: nu
       problems.push(`Hop addition ${index + 1} is not in the catalogue.`);
       return [];
     }
-    const addition = { grams: item.amountGrams, alphaPercent: entry.alphaAcidPercent, minutes: boilMinutesOf(item, design.boilMinutes) };
-    const ibu = attempt(problems, `IBU of ${entry.name}`, () => tinsethIbu(addition, og, design.batchVolumeLitres));
+    const timeProblem = hopTimeProblem(item, design.boilMinutes);
+    if (timeProblem) {
+      problems.push(`Hop addition ${index + 1}: time ${timeProblem}.`);
+      return [];
+    }
+    const ibu = attempt(problems, `IBU of ${entry.name}`, () => additionIbu(item, entry.alphaAcidPercent, og, design));
     return ibu === null ? [] : [{ index, hopId: entry.id, name: entry.name, use: item.use, time: item.time, amountGrams: item.amountGrams, ibu }];
   });
 }
@@ -86,7 +103,8 @@ function waterPlanOf(design: RecipeDesign, bill: BillItem[], brewhouse: Brewhous
       boilOffLitresPerHour: brewhouse.boilOffLitresPerHour,
       grainAbsorptionLitresPerKg: brewhouse.grainAbsorptionLitresPerKg,
       kettleLossLitres: brewhouse.kettleLossLitres,
-      fermenterLossLitres: brewhouse.fermenterLossLitres,
+      // The batch volume is what goes into the fermenter; the fermenter's own loss comes off it later.
+      fermenterLossLitres: 0,
       mashRatioLitresPerKg: brewhouse.mashThicknessLitresPerKg,
     },
     og,
@@ -99,6 +117,9 @@ function waterPlanOf(design: RecipeDesign, bill: BillItem[], brewhouse: Brewhous
     strikeTemperatureC,
     preBoilLitres: plan.preBoilLitres,
     preBoilGravity: plan.preBoilGravity ?? og,
+    mashEfficiencyPercent: mashEfficiencyFromBrewhouse(design.mashEfficiencyPercent, design.batchVolumeLitres, brewhouse.kettleLossLitres),
+    kettleCapacityLitres: brewhouse.kettleCapacityLitres,
+    exceedsKettle: brewhouse.kettleCapacityLitres !== null && plan.preBoilLitres > brewhouse.kettleCapacityLitres,
   };
 }
 

@@ -50,6 +50,16 @@ export const RECIPE_ENTRIES: CatalogueEntry[] = [
     parameters: [json('additions', '[{grams, alphaPercent, minutes}]'), num('boilGravity', 'SG'), num('litres', 'L')], returns: 'IBU',
     call: (a) => r.totalTinsethIbu(jsonArg(a, 'additions'), arg(a, 'boilGravity'), arg(a, 'litres')),
   },
+  e('isomerisationRateRelativeToBoil', 'alpha-acid isomerisation rate relative to the boil (Malowicki)', [num('temperatureC', '°C')], 'fraction',
+    r.isomerisationRateRelativeToBoil),
+  {
+    name: 'hopStandIbu', summary: 'IBU of a whirlpool or hop-stand addition (Tinseth × relative isomerisation rate)',
+    parameters: [num('grams', 'g'), num('alphaPercent', '%'), num('minutes', 'min'), num('boilGravity', 'SG'), num('litres', 'L'), num('standTemperatureC', '°C')],
+    returns: 'IBU',
+    call: (a) => r.hopStandIbu({ grams: arg(a, 'grams'), alphaPercent: arg(a, 'alphaPercent'), minutes: arg(a, 'minutes') }, arg(a, 'boilGravity'), arg(a, 'litres'), arg(a, 'standTemperatureC')),
+  },
+  e('mashEfficiencyFromBrewhouse', 'mash efficiency implied by a brewhouse efficiency into the fermenter', [num('brewhouseEfficiencyPercent', '%'),
+    num('intoFermenterLitres', 'L'), num('kettleLossLitres', 'L')], '%', r.mashEfficiencyFromBrewhouse),
   e('bitternessRatio', 'BU:GU', [num('ibu', 'IBU'), num('og', 'SG')], 'ratio', r.bitternessRatio),
   {
     name: 'moreyColour', summary: 'beer colour by Morey (US gallons)',

@@ -17,6 +17,12 @@ export { tinsethIbu } from './bitterness';
 export { totalTinsethIbu } from './bitterness';
 /** BU:GU, the ratio of IBU to the OG's gravity points. */
 export { bitternessRatio } from './bitterness';
+/** Speed of alpha-acid isomerisation at a temperature relative to the boil (100 °C), by Malowicki's Arrhenius fit. */
+export { isomerisationRateRelativeToBoil } from './hop-stand';
+/** IBU of a whirlpool or hop-stand addition: Tinseth at the stand's minutes, scaled by the relative isomerisation rate. */
+export { hopStandIbu } from './hop-stand';
+/** Mash efficiency implied by a brewhouse efficiency into the fermenter and the wort left in the kettle. */
+export { mashEfficiencyFromBrewhouse } from './efficiency';
 /** Beer colour by Morey's equation from malts and the batch volume in US gallons. */
 export { moreyColour } from './colour';
 /** Beer colour by Morey with the batch volume in litres (malt masses in kilograms or pounds). */
