@@ -1,6 +1,6 @@
 import { DecimalPipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, input } from '@angular/core';
-import { RecipePrediction, StyleTargetComparison, UnitSystem } from '@shared/recipes';
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { HOP_STAND_TEMPERATURE_C, hopTimingText, RecipePrediction, StyleTargetComparison, UnitSystem } from '@shared/recipes';
 import { ColourSwatch } from '../colour-swatch/colour-swatch';
 import { StyleTargetBar } from '../style-target-bar/style-target-bar';
 import { WaterPlan } from '../water-plan/water-plan';
@@ -29,4 +29,7 @@ export class PredictionPanel {
   readonly unitSystem = input<UnitSystem>('metric');
 
   protected readonly digits = TARGET_DIGITS;
+  protected readonly timing = hopTimingText;
+  protected readonly standTemperature = HOP_STAND_TEMPERATURE_C;
+  protected readonly hasHopStand = computed(() => this.prediction()?.hopBitterness.some((hop) => hop.use === 'whirlpool') ?? false);
 }

@@ -1,5 +1,5 @@
-import { FormControl, FormGroup, NonNullableFormBuilder, Validators } from '@angular/forms';
-import { HopUse, RecipeQuantity, toDisplayUnits, UnitSystem } from '@shared/recipes';
+import { AbstractControl, FormControl, FormGroup, NonNullableFormBuilder, ValidationErrors, ValidatorFn, Validators } from '@angular/forms';
+import { HopUse, hopTimeProblem, MAX_HOP_TIME, RecipeQuantity, toDisplayUnits, UnitSystem } from '@shared/recipes';
 import { RecipeFormValue } from '../view-models/recipe-form-model';
 
 /** Mash temperatures the form accepts, °C; converted for a US-unit person. */
@@ -24,8 +24,19 @@ export function limitIn(quantity: RecipeQuantity, siLimit: number, system: UnitS
 
 const positive = [Validators.required, Validators.min(0.001)];
 
+/** A hop row's time against the boil, by the same rule the API applies; the boil time is read when validating. */
+export function hopTimeWithinBoil(boilMinutes: () => number | null): ValidatorFn {
+  return (control: AbstractControl): ValidationErrors | null => {
+    const use = control.parent?.get('use')?.value as HopUse | undefined;
+    const boil = boilMinutes();
+    if (use === undefined || boil === null || control.value === null) return null;
+    const problem = hopTimeProblem({ use, time: control.value }, boil);
+    return problem ? { hopTime: problem } : null;
+  };
+}
+
 /** Builds the form's row groups with their validators. */
-export function recipeRowGroups(fb: NonNullableFormBuilder) {
+export function recipeRowGroups(fb: NonNullableFormBuilder, boilMinutes: () => number | null = () => null) {
   return {
     fermentable(system: UnitSystem, row: RecipeFormValue['fermentables'][number] = { fermentableId: null, amount: null }): FermentableGroup {
       return fb.group({
@@ -37,7 +48,7 @@ export function recipeRowGroups(fb: NonNullableFormBuilder) {
       return fb.group({
         hopId: fb.control<number | null>(row.hopId, Validators.required),
         amount: fb.control<number | null>(row.amount, [...positive, Validators.max(limitIn('hop-mass', SI_LIMITS.amountGrams, system))]),
-        time: fb.control<number | null>(row.time, [Validators.required, Validators.min(0), Validators.max(MAX_MINUTES)]),
+        time: fb.control<number | null>(row.time, [Validators.required, Validators.min(0), Validators.max(MAX_HOP_TIME), hopTimeWithinBoil(boilMinutes)]),
         use: fb.control<HopUse>(row.use, Validators.required),
       });
     },

@@ -11,7 +11,8 @@ import { HopRows } from '../hop-rows/hop-rows';
 import { MashStepRows } from '../mash-step-rows/mash-step-rows';
 import { OtherRows } from '../other-rows/other-rows';
 import { limitIn, MAX_MINUTES, recipeRowGroups, SI_LIMITS } from './recipe-form-groups';
-import { designToFormValue, formValueToDesign, RecipeFormValue } from '../view-models/recipe-form-model';
+import { ExactAmounts } from './exact-amounts';
+import { designToFormValue, formValueToDesign } from '../view-models/recipe-form-model';
 
 /** The recipe as a reactive form in the person's units; emits the design (SI) as it is typed. */
 @Component({
@@ -35,7 +36,7 @@ export class RecipeForm {
   readonly designChanged = output<RecipeDesign | null>();
   readonly saveSubmitted = output<RecipeDesign>();
 
-  protected readonly rows = recipeRowGroups(this.fb);
+  protected readonly rows = recipeRowGroups(this.fb, () => this.form?.controls.boilMinutes.value ?? null);
   protected readonly form = this.fb.group({
     name: ['', [Validators.required, Validators.maxLength(100)]],
     styleId: this.fb.control<number | null>(null),
@@ -50,6 +51,7 @@ export class RecipeForm {
     others: this.fb.array([this.rows.other()]),
   });
   private shownSystem: UnitSystem = 'metric';
+  private readonly exact = new ExactAmounts();
 
   protected readonly label = (quantity: Parameters<typeof unitLabel>[0]) => unitLabel(quantity, this.unitSystem());
   protected readonly maxVolume = computed(() => limitIn('volume', SI_LIMITS.batchVolumeLitres, this.unitSystem()));
@@ -65,7 +67,10 @@ export class RecipeForm {
         this.designChanged.emit(this.liveDesign());
       });
     });
-    this.form.valueChanges.pipe(takeUntilDestroyed(inject(DestroyRef))).subscribe(() => this.designChanged.emit(this.liveDesign()));
+    this.form.valueChanges.pipe(takeUntilDestroyed(inject(DestroyRef))).subscribe(() => {
+      this.revalidateHopTimes();
+      this.designChanged.emit(this.liveDesign());
+    });
   }
 
   protected addFermentable(): void {
@@ -89,13 +94,18 @@ export class RecipeForm {
       this.form.markAllAsTouched();
       return;
     }
-    this.saveSubmitted.emit(formValueToDesign(this.form.getRawValue(), this.unitSystem()));
+    this.saveSubmitted.emit(this.designFromForm());
+  }
+
+  /** Hop times depend on the boil time and each row's use, so they are checked again when either changes. */
+  private revalidateHopTimes(): void {
+    for (const group of this.form.controls.hops.controls) group.controls.time.updateValueAndValidity({ emitEvent: false });
   }
 
   /** Puts a design into the form; when only the unit system changed, what is typed is kept and converted. */
   private load(design: RecipeDesign, system: UnitSystem, editable: boolean): void {
     const typed = this.form.dirty && system !== this.shownSystem && this.form.valid;
-    const source = typed ? formValueToDesign(this.form.getRawValue(), this.shownSystem) : design;
+    const source = typed ? this.designFromForm() : design;
     this.shownSystem = system;
     const value = designToFormValue(source, system);
     this.form.setControl('fermentables', this.fb.array(value.fermentables.map((row) => this.rows.fermentable(system, row))), { emitEvent: false });
@@ -107,22 +117,38 @@ export class RecipeForm {
     if (editable) this.form.enable({ emitEvent: false });
     else this.form.disable({ emitEvent: false });
     if (!typed) this.form.markAsPristine();
+    this.rememberStoredValues(source);
+  }
+
+  private rememberStoredValues(design: RecipeDesign): void {
+    const { controls } = this.form;
+    this.exact.remember(controls.batchVolume, design.batchVolumeLitres);
+    design.fermentables.forEach((item, index) => this.exact.remember(controls.fermentables.at(index).controls.amount, item.amountKg));
+    design.hops.forEach((item, index) => this.exact.remember(controls.hops.at(index).controls.amount, item.amountGrams));
+    design.mashSteps.forEach((step, index) => this.exact.remember(controls.mashSteps.at(index).controls.temperature, step.temperatureC));
+  }
+
+  /** The form as a design in SI units, untouched converted fields at their stored values; `keep` picks the rows. */
+  private designFromForm(keep: (array: FormArray, index: number) => boolean = () => true): RecipeDesign {
+    const { controls } = this.form;
+    const design = formValueToDesign(this.form.getRawValue(), this.shownSystem);
+    const rows = <T>(array: FormArray, items: T[], exact: (item: T, index: number) => T) =>
+      items.map(exact).filter((_item, index) => keep(array, index));
+    return {
+      ...design,
+      batchVolumeLitres: this.exact.si(controls.batchVolume, design.batchVolumeLitres),
+      fermentables: rows(controls.fermentables, design.fermentables, (item, i) => ({ ...item, amountKg: this.exact.si(controls.fermentables.at(i).controls.amount, item.amountKg) })),
+      hops: rows(controls.hops, design.hops, (item, i) => ({ ...item, amountGrams: this.exact.si(controls.hops.at(i).controls.amount, item.amountGrams) })),
+      mashSteps: rows(controls.mashSteps, design.mashSteps, (step, i) => ({ ...step, temperatureC: this.exact.si(controls.mashSteps.at(i).controls.temperature, step.temperatureC) })),
+      others: rows(controls.others, design.others, (item) => item),
+    };
   }
 
   /** The design as typed so far: half-filled rows are left out, so the predictions follow every keystroke. */
   private liveDesign(): RecipeDesign | null {
     const { controls } = this.form;
     if (controls.batchVolume.invalid || controls.mashEfficiencyPercent.invalid || controls.boilMinutes.invalid) return null;
-    const value = this.form.getRawValue();
-    const validRows = <T>(array: FormArray, rows: T[]) => rows.filter((_row, index) => array.at(index).valid);
-    const live: RecipeFormValue = {
-      ...value,
-      name: value.name || 'Untitled',
-      fermentables: validRows(controls.fermentables, value.fermentables),
-      hops: validRows(controls.hops, value.hops),
-      mashSteps: validRows(controls.mashSteps, value.mashSteps),
-      others: validRows(controls.others, value.others),
-    };
-    return formValueToDesign(live, this.unitSystem());
+    const design = this.designFromForm((array, index) => array.at(index).valid);
+    return { ...design, name: design.name || 'Untitled' };
   }
 }

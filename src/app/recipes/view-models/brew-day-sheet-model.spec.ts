@@ -19,11 +19,11 @@ describe('brewDaySheet', () => {
     const sheet = brewDaySheet(generateMockRecipe({ design }), catalogue, MOCK_BREWHOUSE, null, 'metric');
 
     expect(sheet.additions.map((addition) => addition.when)).toEqual([
-      'First wort',
+      'First wort, the whole boil',
       '60 min before the end of the boil',
       '10 min before the end of the boil',
-      'Whirlpool, 20 min stand',
-      'Dry hop, day 3',
+      'Whirlpool, 20 min stand at about 80 °C',
+      'Dry hop, 3 days before packaging',
     ]);
   });
 

@@ -1,6 +1,7 @@
 import {
   BrewhouseSettings,
   compareToStyle,
+  hopTimingText,
   HopUse,
   IngredientCatalogue,
   predictRecipe,
@@ -12,19 +13,6 @@ import {
 
 /** The order additions happen in on the day: first wort, the boil counting down, whirlpool, dry hop. */
 const USE_ORDER: Record<HopUse, number> = { 'first wort': 0, boil: 1, whirlpool: 2, 'dry hop': 3 };
-
-function additionTime(use: HopUse, time: number): string {
-  switch (use) {
-    case 'first wort':
-      return 'First wort';
-    case 'boil':
-      return time === 0 ? 'Flame-out' : `${time} min before the end of the boil`;
-    case 'whirlpool':
-      return `Whirlpool, ${time} min stand`;
-    default:
-      return `Dry hop, day ${time}`;
-  }
-}
 
 const find = <T extends { id: number; name: string }>(entries: readonly T[], id: number | null) => entries.find((entry) => entry.id === id) ?? null;
 
@@ -51,7 +39,7 @@ export function brewDaySheet(recipe: Recipe, catalogue: IngredientCatalogue, bre
     mashSteps: design.mashSteps.map((step) => ({ ...step, temperature: shownAmountText('temperature', step.temperatureC, system) })),
     additions: design.hops
       .map((item, index) => ({
-        when: additionTime(item.use, item.time),
+        when: hopTimingText(item.use, item.time),
         order: [USE_ORDER[item.use], item.use === 'dry hop' ? item.time : -item.time] as const,
         name: find(catalogue.hops, item.hopId)?.name ?? `entry ${item.hopId}`,
         amount: shownAmountText('hop-mass', item.amountGrams, system),
