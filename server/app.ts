@@ -31,6 +31,7 @@ import { createCatalogueService } from './catalogue/catalogue.service';
 import { createPreferencesRouter } from './preferences/preferences.routes';
 import { limitPerAddress } from './rate-limits/limit-per-address';
 import { RateLimit } from './rate-limits/rate-limiter';
+import { createProfileRouter, createProfileService } from './profile';
 import { createRecipesRouter, createRecipesService } from './recipes';
 import { createStylesRouter } from './styles/styles.routes';
 import { createStylesService } from './styles/styles.service';
@@ -117,6 +118,7 @@ export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAU
   mountApi(app, '/api/password-resets', createPasswordResetsRouter(resets, limitPerAddress(db, 'password-reset', publicRequestLimit)));
   mountApi(app, '/api/members', createMembersRouter(createMembersService(db, invitations), resets));
   mountApi(app, '/api/preferences', createPreferencesRouter(db));
+  mountApi(app, '/api/profile', createProfileRouter(createProfileService({ db, hasher })));
   mountApi(app, '/api/ingredients', createCatalogueRouter(createCatalogueService(db)));
   mountApi(app, '/api/styles', createStylesRouter(createStylesService(db)));
   mountApi(app, '/api/brewhouse', createBrewhouseRouter(db));

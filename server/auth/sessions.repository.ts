@@ -21,6 +21,11 @@ export const sessionsRepository = {
     await db('sessions').where({ sid }).delete();
   },
 
+  /** Ends every session of the user but the one given, so a changed password locks out other devices. */
+  async endOthers(db: Knex, userId: number, keepSessionId: string): Promise<number> {
+    return db('sessions').whereRaw("JSON_VALUE(sess, '$.passport.user') = ?", [String(userId)]).whereNot('sid', keepSessionId).delete();
+  },
+
   /** Deletes sessions past their expiry; returns how many. */
   async purgeExpired(db: Knex, now: Date): Promise<number> {
     return db('sessions').where('expired', '<=', now).delete();

@@ -77,7 +77,7 @@ export const usersRepository = {
     await db('user_roles').insert(roles.map((role) => ({ user_id: userId, role })));
   },
 
-  async update(db: Knex, userId: number, changes: Partial<Pick<UserRow, 'active' | 'password_hash' | 'password_reset_requested_at' | 'unit_system'>>): Promise<void> {
+  async update(db: Knex, userId: number, changes: Partial<Pick<UserRow, 'name' | 'active' | 'password_hash' | 'password_reset_requested_at' | 'unit_system'>>): Promise<void> {
     await db('users').where({ id: userId }).update({ ...changes, updated_at: new Date() });
   },
 

@@ -1,0 +1,2 @@
+export { createProfileRouter } from './profile.routes';
+export { createProfileService, type ProfileService } from './profile.service';
