@@ -36,6 +36,7 @@ export const routes: Routes = [
         canActivate: [roleGuard(['admin'])],
         loadChildren: () => import('./members/members.routes').then((m) => m.membersRoutes),
       },
+      { path: 'profile', title: 'Your profile · Commonwort', loadChildren: () => import('./profile/profile.routes').then((m) => m.profileRoutes) },
       {
         path: 'not-allowed',
         title: 'Not allowed · Commonwort',

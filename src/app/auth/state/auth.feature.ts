@@ -2,6 +2,7 @@ import { createFeature, createReducer, createSelector, on } from '@ngrx/store';
 import { Role, SessionUser } from '@shared/auth';
 import { FieldErrors } from '@app/ui/server-field-errors';
 import { MembersApiActions } from '@app/members/state/members-api.actions';
+import { ProfileApiActions } from '@app/profile/state/profile-api.actions';
 import { AuthApiActions } from './auth-api.actions';
 import { SignInPageActions } from './sign-in-page.actions';
 
@@ -37,6 +38,10 @@ export const authFeature = createFeature({
     initialAuthState,
     on(AuthApiActions.sessionLoadedSuccess, (state, { user, coopTimeZone }): AuthState => ({ ...state, user, coopTimeZone, sessionLoaded: true })),
     on(AuthApiActions.sessionLoadedFailure, (state): AuthState => ({ ...state, user: null, sessionLoaded: true })),
+    on(ProfileApiActions.profileSavedSuccess, (state, { profile }): AuthState => ({
+      ...state,
+      user: state.user && { ...state.user, name: profile.name },
+    })),
     on(SignInPageActions.opened, (state): AuthState => ({
       ...state,
       signInError: null,
