@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { Knex } from 'knex';
 import { z } from 'zod';
+import { KETTLE_CAPACITY_MAX_LITRES } from '@shared/recipes';
 import { recordAudit } from '../audit/audit-log';
 import { requireRole, signedIn } from '../auth/route-access';
 import { parseRequest } from '../http/parse-request';
@@ -16,7 +17,12 @@ const settingsSchema = z.object({
   mashThicknessLitresPerKg: z.number('must be a number').min(1.5, 'must be at least 1.5 L/kg').max(8, 'must be at most 8 L/kg'),
   grainTemperatureC: z.number('must be a number').min(-10).max(45),
   mashTunHeatCapacityKjPerK: amount(100, 'kJ/K').nullable(),
-  kettleCapacityLitres: z.number('must be a number').positive('must be more than 0').max(2000, 'must be at most 2000 L').nullable().default(null),
+  kettleCapacityLitres: z
+    .number('must be a number')
+    .positive('must be more than 0')
+    .max(KETTLE_CAPACITY_MAX_LITRES, `must be at most ${KETTLE_CAPACITY_MAX_LITRES} L`)
+    .nullable()
+    .default(null),
 });
 
 /** /api/brewhouse: read by everyone, set by brewers and admins. */

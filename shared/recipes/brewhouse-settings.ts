@@ -14,6 +14,9 @@ export interface BrewhouseSettings {
   kettleCapacityLitres: number | null;
 }
 
+/** Largest kettle the settings accept, L (both the API and the form read it). */
+export const KETTLE_CAPACITY_MAX_LITRES = 2000;
+
 /** Sensible settings for a small electric kettle, used until the co-op sets its own (common practice). */
 export const DEFAULT_BREWHOUSE_SETTINGS: BrewhouseSettings = {
   boilOffLitresPerHour: 4,

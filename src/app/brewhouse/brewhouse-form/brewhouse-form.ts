@@ -3,9 +3,9 @@ import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angula
 import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
-import { BrewhouseSettings } from '@shared/recipes';
+import { BrewhouseSettings, KETTLE_CAPACITY_MAX_LITRES } from '@shared/recipes';
 
-type NumericKey = Exclude<keyof BrewhouseSettings, 'mashTunHeatCapacityKjPerK'>;
+type NumericKey = Exclude<keyof BrewhouseSettings, 'mashTunHeatCapacityKjPerK' | 'kettleCapacityLitres'>;
 
 /** The fields of the brewhouse settings, with the ranges the water plan accepts. */
 const FIELDS: { key: NumericKey; label: string; unit: string; min: number; max: number }[] = [
@@ -38,7 +38,9 @@ export class BrewhouseForm {
       FIELDS.map((f) => [f.key, this.fb.control<number | null>(null, [Validators.required, Validators.min(f.min), Validators.max(f.max)])]),
     ) as Record<NumericKey, ReturnType<typeof this.fb.control<number | null>>>),
     mashTunHeatCapacityKjPerK: this.fb.control<number | null>(null, [Validators.min(0), Validators.max(100)]),
+    kettleCapacityLitres: this.fb.control<number | null>(null, [Validators.min(0.1), Validators.max(KETTLE_CAPACITY_MAX_LITRES)]),
   });
+  protected readonly maxKettle = KETTLE_CAPACITY_MAX_LITRES;
 
   constructor() {
     effect(() => {
