@@ -5,6 +5,7 @@ import { firstValueFrom, Observable, of, throwError } from 'rxjs';
 import { generateMockInvitation, generateMockMember } from '@app/testing/member-mock';
 import { MembersClient } from '../members-client';
 import { MembersApiActions } from './members-api.actions';
+import { MemberChangeConfirmationActions } from './member-change-confirmation.actions';
 import { MembersPageActions } from './members-page.actions';
 import { createInvitation, loadMembers, updateMember } from './members.effects';
 
@@ -27,7 +28,7 @@ describe('members effects', () => {
     const update = jest.fn(() => of(member));
 
     const result = await firstValueFrom(
-      updateMember(actionsOf(MembersPageActions.rolesChanged({ memberId: member.id, roles: ['member', 'brewer'] })), fakeClient({ update })),
+      updateMember(actionsOf(MemberChangeConfirmationActions.rolesChangeConfirmed({ memberId: member.id, roles: ['member', 'brewer'] })), fakeClient({ update })),
     );
 
     expect(update).toHaveBeenCalledWith(member.id, { roles: ['member', 'brewer'] });
@@ -42,7 +43,7 @@ describe('members effects', () => {
     const client = fakeClient({ update: () => throwError(() => refusal) });
 
     const result = await firstValueFrom(
-      updateMember(actionsOf(MembersPageActions.activeChanged({ memberId: 22, active: false })), client),
+      updateMember(actionsOf(MemberChangeConfirmationActions.activeChangeConfirmed({ memberId: 22, active: false })), client),
     );
 
     expect(result).toEqual(

@@ -4,6 +4,7 @@ import { Actions, createEffect, ofType } from '@ngrx/effects';
 import { catchError, exhaustMap, map, mergeMap, of, switchMap } from 'rxjs';
 import { apiErrorBody, apiErrorMessage, apiFieldErrors } from '@app/core/api-error-message';
 import { MembersClient } from '../members-client';
+import { MemberChangeConfirmationActions } from './member-change-confirmation.actions';
 import { MembersApiActions } from './members-api.actions';
 import { MembersPageActions } from './members-page.actions';
 
@@ -37,7 +38,7 @@ export const loadMembers = createEffect(
 export const updateMember = createEffect(
   (actions$ = inject(Actions), client = inject(MembersClient)) =>
     actions$.pipe(
-      ofType(MembersPageActions.rolesChanged, MembersPageActions.activeChanged),
+      ofType(MemberChangeConfirmationActions.rolesChangeConfirmed, MemberChangeConfirmationActions.activeChangeConfirmed),
       mergeMap((action) => {
         const request = 'roles' in action ? { roles: action.roles } : { active: action.active };
         return client.update(action.memberId, request).pipe(
@@ -101,7 +102,7 @@ export const createInvitation = createEffect(
 export const revokeInvitation = createEffect(
   (actions$ = inject(Actions), client = inject(MembersClient)) =>
     actions$.pipe(
-      ofType(MembersPageActions.invitationRevoked),
+      ofType(MemberChangeConfirmationActions.revocationConfirmed),
       mergeMap(({ invitationId }) =>
         client.revokeInvitation(invitationId).pipe(
           map(() => MembersApiActions.invitationRevokedSuccess({ invitationId })),

@@ -1,6 +1,7 @@
 import { AuthApiActions } from '@app/auth/state/auth-api.actions';
 import { generateMockInvitation, generateMockMember } from '@app/testing/member-mock';
 import { MembersApiActions } from './members-api.actions';
+import { MemberChangeConfirmationActions } from './member-change-confirmation.actions';
 import { MembersPageActions } from './members-page.actions';
 import { initialMembersState, membersAdapter, membersFeature, MembersState } from './members.feature';
 
@@ -24,7 +25,7 @@ describe('membersFeature reducer', () => {
   });
 
   it('marks a member as saving while a role change is on its way, and replaces them when it is saved', () => {
-    const saving = reducer(loaded(), MembersPageActions.rolesChanged({ memberId: jonah.id, roles: ['member', 'brewer'] }));
+    const saving = reducer(loaded(), MemberChangeConfirmationActions.rolesChangeConfirmed({ memberId: jonah.id, roles: ['member', 'brewer'] }));
     expect(saving.savingMemberIds).toEqual([jonah.id]);
 
     const saved = reducer(saving, MembersApiActions.memberUpdatedSuccess({ member: { ...jonah, roles: ['member', 'brewer'] } }));
@@ -34,7 +35,7 @@ describe('membersFeature reducer', () => {
   });
 
   it('keeps the member unchanged and stops saving when the server refuses (last admin)', () => {
-    const saving = reducer(loaded(), MembersPageActions.activeChanged({ memberId: ada.id, active: false }));
+    const saving = reducer(loaded(), MemberChangeConfirmationActions.activeChangeConfirmed({ memberId: ada.id, active: false }));
 
     const state = reducer(saving, MembersApiActions.memberUpdatedFailure({ memberId: ada.id, message: 'Last admin.' }));
 

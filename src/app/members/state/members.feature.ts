@@ -3,6 +3,7 @@ import { createFeature, createReducer, createSelector, on } from '@ngrx/store';
 import { Invitation, Member } from '@shared/members';
 import { AuthApiActions } from '@app/auth/state/auth-api.actions';
 import { FieldErrors } from '@app/ui/server-field-errors';
+import { MemberChangeConfirmationActions } from './member-change-confirmation.actions';
 import { MembersApiActions } from './members-api.actions';
 import { MembersPageActions } from './members-page.actions';
 
@@ -64,8 +65,8 @@ export const membersFeature = createFeature({
       loadError: message,
     })),
     on(
-      MembersPageActions.rolesChanged,
-      MembersPageActions.activeChanged,
+      MemberChangeConfirmationActions.rolesChangeConfirmed,
+      MemberChangeConfirmationActions.activeChangeConfirmed,
       MembersPageActions.resetLinkRequested,
       (state, { memberId }): MembersState => ({
         ...state,
