@@ -6,10 +6,13 @@ import * as catalogueEffects from '@app/catalogue/state/catalogue.effects';
 import { catalogueFeature } from '@app/catalogue/state/catalogue.feature';
 import * as preferencesEffects from './state/preferences.effects';
 import * as recipeFileEffects from './state/recipe-file.effects';
+import * as recipeTitleEffects from './state/recipe-title.effects';
 import * as recipeVersionsEffects from './state/recipe-versions.effects';
 import * as recipesSnackBarEffects from './state/recipes-snack-bar.effects';
 import * as recipesEffects from './state/recipes.effects';
 import { recipesFeature } from './state/recipes.feature';
+import { unsavedEditsFeature } from './state/unsaved-edits.feature';
+import { unsavedEditsGuard } from './unsaved-edits-guard';
 
 export const recipesRoutes: Routes = [
   {
@@ -17,7 +20,9 @@ export const recipesRoutes: Routes = [
     providers: [
       provideState(recipesFeature),
       provideState(catalogueFeature),
+      provideState(unsavedEditsFeature),
       provideEffects(
+        recipeTitleEffects,
         recipesEffects,
         recipeFileEffects,
         recipeVersionsEffects,
@@ -34,8 +39,17 @@ export const recipesRoutes: Routes = [
         title: 'Ingredient catalogue · Commonwort',
         loadComponent: () => import('@app/catalogue/catalogue-page/catalogue-page').then((m) => m.CataloguePage),
       },
-      { path: 'new', title: 'New recipe · Commonwort', loadComponent: () => import('./recipe-editor-page/recipe-editor-page').then((m) => m.RecipeEditorPage) },
-      { path: ':recipeId', loadComponent: () => import('./recipe-editor-page/recipe-editor-page').then((m) => m.RecipeEditorPage) },
+      {
+        path: 'new',
+        title: 'New recipe · Commonwort',
+        canDeactivate: [unsavedEditsGuard],
+        loadComponent: () => import('./recipe-editor-page/recipe-editor-page').then((m) => m.RecipeEditorPage),
+      },
+      {
+        path: ':recipeId',
+        canDeactivate: [unsavedEditsGuard],
+        loadComponent: () => import('./recipe-editor-page/recipe-editor-page').then((m) => m.RecipeEditorPage),
+      },
       {
         path: ':recipeId/versions',
         title: 'Recipe versions · Commonwort',

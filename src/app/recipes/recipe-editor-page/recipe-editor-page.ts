@@ -1,21 +1,24 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal, untracked } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, ElementRef, inject, input, signal, untracked, viewChild } from '@angular/core';
 import { Store } from '@ngrx/store';
 import { authFeature } from '@app/auth/state/auth.feature';
 import { RecipeDesign, RecipeVisibility, UnitSystem } from '@shared/recipes';
 import { PredictionPanel } from '../prediction-panel/prediction-panel';
+import { PredictionSummary } from '../prediction-summary/prediction-summary';
 import { RecipeActions } from '../recipe-actions/recipe-actions';
 import { RecipeForm } from '../recipe-form/recipe-form';
 import { ScalePanel } from '../scale-panel/scale-panel';
 import { RecipeEditorPageActions } from '../state/recipe-editor-page.actions';
+import { unsavedEditsFeature } from '../state/unsaved-edits.feature';
 import { selectEditorPrediction, selectEditorStyle, selectEditorStyleComparison, selectRecipeEditorViewModel } from '../state/recipes.selectors';
 
 /** New and existing recipes: the form, its live predictions and what can be done with the recipe. */
 @Component({
   selector: 'cw-recipe-editor-page',
-  imports: [RecipeForm, PredictionPanel, RecipeActions, ScalePanel],
+  imports: [RecipeForm, PredictionPanel, PredictionSummary, RecipeActions, ScalePanel],
   templateUrl: './recipe-editor-page.html',
   styleUrl: './recipe-editor-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
+  host: { '(window:beforeunload)': 'warnBeforeUnload($event)' },
 })
 export class RecipeEditorPage {
   private readonly store = inject(Store);
@@ -27,7 +30,9 @@ export class RecipeEditorPage {
   protected readonly comparisons = this.store.selectSignal(selectEditorStyleComparison);
   protected readonly style = this.store.selectSignal(selectEditorStyle);
   protected readonly isAdmin = this.store.selectSignal(authFeature.selectIsAdmin);
+  protected readonly unsaved = this.store.selectSignal(unsavedEditsFeature.selectUnsaved);
   protected readonly scaling = signal(false);
+  private readonly panel = viewChild(PredictionPanel, { read: ElementRef });
   protected readonly heading = computed(() => {
     const recipe = this.vm().recipe;
     return recipe ? recipe.name : this.recipeId() ? 'Recipe' : 'New recipe';
@@ -45,6 +50,24 @@ export class RecipeEditorPage {
 
   protected changeDesign(design: RecipeDesign | null): void {
     this.store.dispatch(RecipeEditorPageActions.designChanged({ design }));
+  }
+
+  protected markEdited(): void {
+    if (!this.unsaved()) this.store.dispatch(RecipeEditorPageActions.designEdited());
+  }
+
+  /** Opens the full predictions from the phone summary: brings the panel into view and moves focus there. */
+  protected showPanel(): void {
+    const panel = this.panel()?.nativeElement.querySelector('section') as HTMLElement | null | undefined;
+    panel?.scrollIntoView({ behavior: 'smooth', block: 'start' });
+    panel?.focus({ preventScroll: true });
+  }
+
+  /** The browser asks before a reload or a closed tab throws unsaved edits away. */
+  protected warnBeforeUnload(event: BeforeUnloadEvent): void {
+    if (!this.unsaved()) return;
+    event.preventDefault();
+    event.returnValue = '';
   }
 
   protected save(design: RecipeDesign): void {

@@ -35,6 +35,8 @@ export class RecipeForm {
   readonly saving = input(false);
   readonly designChanged = output<RecipeDesign | null>();
   readonly saveSubmitted = output<RecipeDesign>();
+  /** The person changed something since the design was last put into the form. */
+  readonly edited = output<void>();
 
   protected readonly rows = recipeRowGroups(this.fb, () => this.form?.controls.boilMinutes.value ?? null);
   protected readonly form = this.fb.group({
@@ -69,24 +71,34 @@ export class RecipeForm {
     });
     this.form.valueChanges.pipe(takeUntilDestroyed(inject(DestroyRef))).subscribe(() => {
       this.revalidateHopTimes();
+      if (this.form.dirty) this.edited.emit();
       this.designChanged.emit(this.liveDesign());
     });
   }
 
   protected addFermentable(): void {
+    this.form.markAsDirty();
     this.form.controls.fermentables.push(this.rows.fermentable(this.unitSystem()));
   }
 
   protected addHop(): void {
+    this.form.markAsDirty();
     this.form.controls.hops.push(this.rows.hop(this.unitSystem()));
   }
 
   protected addMashStep(): void {
+    this.form.markAsDirty();
     this.form.controls.mashSteps.push(this.rows.mashStep({ name: '', temperature: null, minutes: null }, this.unitSystem()));
   }
 
   protected addOther(): void {
+    this.form.markAsDirty();
     this.form.controls.others.push(this.rows.other());
+  }
+
+  protected removeRow(rows: FormArray, index: number): void {
+    this.form.markAsDirty();
+    rows.removeAt(index);
   }
 
   protected submit(): void {

@@ -7,6 +7,7 @@ export const RecipeEditorPageActions = createActionGroup({
     'New Opened': emptyProps(),
     'Existing Opened': props<{ recipeId: number }>(),
     'Design Changed': props<{ design: RecipeDesign | null }>(),
+    'Design Edited': emptyProps(),
     'Save Submitted': props<{ recipeId: number | null; design: RecipeDesign; visibility: RecipeVisibility }>(),
     'Visibility Changed': props<{ recipeId: number; visibility: RecipeVisibility }>(),
     'Archive Toggled': props<{ recipeId: number; archived: boolean }>(),

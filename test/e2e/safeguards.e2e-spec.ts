@@ -1,0 +1,104 @@
+import { createCatalogueEntries } from '../integration/helpers/catalogue-factory';
+import { createUser } from '../integration/helpers/user-factory';
+import { newPage, seriousA11yViolations } from './helpers/browser';
+import { useE2eEnvironment } from './helpers/e2e-environment';
+import { signInPage } from './helpers/pages';
+import { recipeEditorPage } from './helpers/recipes-pages';
+
+describe('Recipe editor safeguards in the browser', () => {
+  const env = useE2eEnvironment();
+
+  it('when a member leaves the editor with unsaved edits, then the page marks them and asks first; staying keeps the edits', async () => {
+    const member = await createUser(env.server.db, ['member']);
+    const { tag } = await createCatalogueEntries(env.server.db);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
+    await signInPage.signIn(page, member.email, member.password);
+    await page.waitForURL(/\/today/);
+    await recipeEditorPage.openNew(page);
+    expect(await page.getByTestId('unsaved-marker').count()).toBe(0);
+
+    await recipeEditorPage.name(page, `Half-done stout ${tag}`);
+    await recipeEditorPage.addFermentable(page, `Test pale malt ${tag} · grain`, '4');
+    await page.getByTestId('unsaved-marker').waitFor();
+    await page.getByRole('link', { name: 'Today' }).click();
+
+    const dialog = page.getByRole('alertdialog', { name: 'Leave without saving?' });
+    await dialog.waitFor();
+    expect(await seriousA11yViolations(page)).toEqual([]);
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    expect(page.url()).toMatch(/\/recipes\/new$/);
+    expect(await page.getByLabel('Recipe name').inputValue()).toBe(`Half-done stout ${tag}`);
+
+    await page.getByRole('link', { name: 'Today' }).click();
+    await page.getByRole('alertdialog').getByRole('button', { name: 'Discard changes' }).click();
+    await page.waitForURL(/\/today/);
+    await context.close();
+  }, 90_000);
+
+  it('when a member types on a 375 px phone, then OG, FG, both ABV figures, IBU and colour stay in sight and follow the typing', async () => {
+    const member = await createUser(env.server.db, ['member']);
+    const { tag } = await createCatalogueEntries(env.server.db);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl, { width: 375, height: 740 });
+    await signInPage.signIn(page, member.email, member.password);
+    await page.waitForURL(/\/today/);
+    await recipeEditorPage.openNew(page);
+    await recipeEditorPage.addFermentable(page, `Test pale malt ${tag} · grain`, '4.5');
+    await recipeEditorPage.chooseYeast(page, `Test yeast ${tag} (72–78 %)`);
+    await recipeEditorPage.addHop(page, `Test hop ${tag} · 10 % AA · pellet`, '20', '60');
+    const summary = page.locator('cw-prediction-summary');
+    const ibuBefore = (await summary.getByTestId('summary-ibu').textContent())?.trim();
+
+    const hopAmount = page.getByRole('group', { name: /^Hop addition \d+$/ }).last().getByLabel('Amount');
+    await hopAmount.fill('40');
+    await summary.getByTestId('summary-ibu').filter({ hasNotText: ibuBefore }).waitFor();
+
+    const box = (await summary.boundingBox())!;
+    const field = (await hopAmount.boundingBox())!;
+    expect(field.y).toBeGreaterThan(740 / 2);
+    expect(box.y).toBeGreaterThanOrEqual(0);
+    expect(box.y + box.height).toBeLessThanOrEqual(field.y);
+    for (const figure of ['og', 'fg', 'abv', 'ibu', 'colour']) {
+      expect(await summary.getByTestId(`summary-${figure}`).isVisible()).toBe(true);
+      expect((await summary.getByTestId(`summary-${figure}`).textContent())?.trim()).not.toMatch(/^–/);
+    }
+    expect((await summary.getByTestId('summary-og').textContent())?.trim()).toBe(await recipeEditorPage.shown(page, 'og'));
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
+
+    await summary.getByRole('button').click();
+    await page.waitForFunction(() => document.activeElement?.getAttribute('aria-labelledby') === 'cw-prediction-title');
+    expect(await page.getByRole('heading', { name: 'Predictions' }).isVisible()).toBe(true);
+    await context.close();
+  }, 90_000);
+});
+
+describe('Members safeguards in the browser', () => {
+  const env = useE2eEnvironment();
+
+  it('when an admin removes her own admin role, then she is warned that she loses access, and cancelling keeps the role', async () => {
+    const admin = await createUser(env.server.db, ['member', 'admin'], { name: 'Careful Admin' });
+    await createUser(env.server.db, ['member', 'admin'], { name: 'Second Admin' });
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
+    await signInPage.signIn(page, admin.email, admin.password);
+    await page.waitForURL(/\/today/);
+    await page.goto('/members');
+    const ownAdmin = page.getByRole('button', { name: 'admin role for Careful Admin' });
+
+    await ownAdmin.click();
+    const dialog = page.getByRole('alertdialog', { name: 'Remove your own admin role?' });
+    await dialog.waitFor();
+    expect(await dialog.textContent()).toContain('You will lose access to the Members page');
+    expect(await seriousA11yViolations(page)).toEqual([]);
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
+    await dialog.waitFor({ state: 'detached' });
+
+    expect(await ownAdmin.getAttribute('aria-pressed')).toBe('true');
+    expect(await env.server.db('user_roles').where({ user_id: admin.id, role: 'admin' })).toHaveLength(1);
+
+    await ownAdmin.click();
+    await page.getByRole('alertdialog').getByRole('button', { name: 'Remove my admin role' }).click();
+    await page.getByText('Saved the changes to Careful Admin.').waitFor();
+    expect(await env.server.db('user_roles').where({ user_id: admin.id, role: 'admin' })).toHaveLength(0);
+    await context.close();
+  }, 90_000);
+});
