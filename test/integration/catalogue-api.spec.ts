@@ -98,7 +98,7 @@ describe('Ingredient catalogue, styles and brewhouse API', () => {
   });
 
   it('when a brewer saves brewhouse settings, then everyone reads them; a member may not change them', async () => {
-    const settings = { boilOffLitresPerHour: 3.5, grainAbsorptionLitresPerKg: 0.9, kettleLossLitres: 1, fermenterLossLitres: 0.5, mashThicknessLitresPerKg: 3, grainTemperatureC: 18, mashTunHeatCapacityKjPerK: null };
+    const settings = { boilOffLitresPerHour: 3.5, grainAbsorptionLitresPerKg: 0.9, kettleLossLitres: 1, fermenterLossLitres: 0.5, mashThicknessLitresPerKg: 3, grainTemperatureC: 18, mashTunHeatCapacityKjPerK: null, kettleCapacityLitres: 40 };
     expect((await (await brewer()).send('put', '/api/brewhouse', settings)).status).toBe(200);
     const memberClient = await member();
     expect((await memberClient.get('/api/brewhouse')).body).toEqual(settings);

@@ -9,6 +9,9 @@ function canonicalJson(value: unknown): string {
   );
 }
 
+// Each test mounts the whole form with its Material fields, which takes a few seconds on a busy machine.
+jest.setTimeout(20_000);
+
 describe('RecipeForm', () => {
   let fixture: ComponentFixture<RecipeForm>;
   let element: HTMLElement;
@@ -52,7 +55,7 @@ describe('RecipeForm', () => {
     await fixture.whenStable();
 
     expect(canonicalJson(saved[0])).toBe(canonicalJson(design));
-  }, 20_000);
+  });
 
   it('takes what the person typed in US units, converted once', async () => {
     await mount(generateMockDesign());
