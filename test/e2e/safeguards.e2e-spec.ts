@@ -55,7 +55,8 @@ describe('Recipe editor safeguards in the browser', () => {
 
     const box = (await summary.boundingBox())!;
     const field = (await hopAmount.boundingBox())!;
-    expect(field.y).toBeGreaterThan(740 / 2);
+    const fullPanel = (await page.getByRole('heading', { name: 'Predictions' }).boundingBox())!;
+    expect(fullPanel.y).toBeGreaterThan(740);
     expect(box.y).toBeGreaterThanOrEqual(0);
     expect(box.y + box.height).toBeLessThanOrEqual(field.y);
     for (const figure of ['og', 'fg', 'abv', 'ibu', 'colour']) {
