@@ -5,14 +5,16 @@ import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { Store } from '@ngrx/store';
 import { TARGET_DIGITS } from '../prediction-panel/prediction-panel';
+import { RecipeUnavailable } from '../recipe-unavailable/recipe-unavailable';
 import { WaterPlan } from '../water-plan/water-plan';
 import { BrewDaySheetPageActions } from '../state/brew-day-sheet-page.actions';
+import { recipesFeature } from '../state/recipes.feature';
 import { selectBrewDaySheetViewModel } from '../state/recipes.selectors';
 
 /** A printable sheet for the brew day: ingredients, additions by time, targets, room for readings, cautions. */
 @Component({
   selector: 'cw-brew-day-sheet-page',
-  imports: [DecimalPipe, RouterLink, MatButton, MatIcon, WaterPlan],
+  imports: [DecimalPipe, RouterLink, MatButton, MatIcon, WaterPlan, RecipeUnavailable],
   templateUrl: './brew-day-sheet-page.html',
   styleUrl: './brew-day-sheet-page.scss',
   // The print rules must reach the shell's toolbar and navigation, so they are not encapsulated.
@@ -24,6 +26,7 @@ export class BrewDaySheetPage {
   readonly recipeId = input.required<string>();
 
   protected readonly sheet = this.store.selectSignal(selectBrewDaySheetViewModel);
+  protected readonly error = this.store.selectSignal(recipesFeature.selectCurrentError);
   protected readonly digits = TARGET_DIGITS;
 
   constructor() {

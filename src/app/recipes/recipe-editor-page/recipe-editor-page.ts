@@ -6,6 +6,7 @@ import { PredictionPanel } from '../prediction-panel/prediction-panel';
 import { PredictionSummary } from '../prediction-summary/prediction-summary';
 import { RecipeActions } from '../recipe-actions/recipe-actions';
 import { RecipeForm } from '../recipe-form/recipe-form';
+import { RecipeUnavailable } from '../recipe-unavailable/recipe-unavailable';
 import { ScalePanel } from '../scale-panel/scale-panel';
 import { RecipeEditorPageActions } from '../state/recipe-editor-page.actions';
 import { unsavedEditsFeature } from '../state/unsaved-edits.feature';
@@ -14,7 +15,7 @@ import { selectEditorPrediction, selectEditorStyle, selectEditorStyleComparison,
 /** New and existing recipes: the form, its live predictions and what can be done with the recipe. */
 @Component({
   selector: 'cw-recipe-editor-page',
-  imports: [RecipeForm, PredictionPanel, PredictionSummary, RecipeActions, ScalePanel],
+  imports: [RecipeForm, PredictionPanel, PredictionSummary, RecipeActions, ScalePanel, RecipeUnavailable],
   templateUrl: './recipe-editor-page.html',
   styleUrl: './recipe-editor-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,6 +1,7 @@
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import { MockStore, provideMockStore } from '@ngrx/store/testing';
+import { authFeature } from '@app/auth/state/auth.feature';
 import { generateMockRecipe } from '@app/testing/recipe-mock';
 import { RecipeListPageActions } from '../state/recipe-list-page.actions';
 import { selectRecipeListViewModel } from '../state/recipes.selectors';
@@ -15,6 +16,7 @@ describe('RecipeListPage', () => {
         provideRouter([]),
         provideMockStore({
           selectors: [
+            { selector: authFeature.selectCoopTimeZone, value: 'UTC' },
             { selector: selectRecipeListViewModel, value: { recipes: [{ ...summary, styleName: 'Co-op pale', batchVolume: '20 L' }], search: '', includeArchived: false, loading: false, error: null } },
           ],
         }),

@@ -6,6 +6,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
 import { Store } from '@ngrx/store';
+import { authFeature } from '@app/auth/state/auth.feature';
 import { RecipeTable } from '../recipe-table/recipe-table';
 import { RecipeListPageActions } from '../state/recipe-list-page.actions';
 import { selectRecipeListViewModel } from '../state/recipes.selectors';
@@ -22,6 +23,7 @@ export class RecipeListPage implements OnInit {
   private readonly store = inject(Store);
 
   protected readonly vm = this.store.selectSignal(selectRecipeListViewModel);
+  protected readonly timeZone = this.store.selectSignal(authFeature.selectCoopTimeZone);
 
   ngOnInit(): void {
     this.store.dispatch(RecipeListPageActions.opened());

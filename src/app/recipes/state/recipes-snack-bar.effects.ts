@@ -34,12 +34,11 @@ export const showRecipeSuccess = createEffect(
   { functional: true, dispatch: false },
 );
 
+// A recipe or list that cannot be loaded is said on its page, with the way back, not a second time here.
 export const showRecipeFailure = createEffect(
   (actions$ = inject(Actions), snackBar = inject(MatSnackBar)) =>
     actions$.pipe(
       ofType(
-        RecipesApiActions.recipesLoadedFailure,
-        RecipesApiActions.recipeLoadedFailure,
         RecipesApiActions.recipeSavedFailure,
         RecipesApiActions.recipeUpdatedFailure,
         RecipesApiActions.recipeClonedFailure,

@@ -10,6 +10,9 @@ export interface ConfirmQuestion {
   lockout?: boolean;
 }
 
+/** The same question under the name the batch pages use. */
+export type ConfirmDialogData = ConfirmQuestion;
+
 /** Asks before an action that locks someone out or cannot be undone; closes with true only on the explicit yes. */
 @Component({
   selector: 'cw-confirm-dialog',
