@@ -11,9 +11,13 @@ import { CatalogueApiActions } from '@app/catalogue/state/catalogue-api.actions'
 import { catalogueFeature } from '@app/catalogue/state/catalogue.feature';
 import { RecipeEditorPageActions } from '../state/recipe-editor-page.actions';
 import { recipesFeature } from '../state/recipes.feature';
+import { initialUnsavedEditsState, unsavedEditsFeature } from '../state/unsaved-edits.feature';
 import { RecipeEditorPage } from './recipe-editor-page';
 
 const catalogue = generateMockCatalogue();
+
+// The page is driven through its whole form with Material fields, which takes seconds on a busy machine.
+jest.setTimeout(30_000);
 
 describe('RecipeEditorPage', () => {
   let fixture: ComponentFixture<RecipeEditorPage>;
@@ -44,7 +48,7 @@ describe('RecipeEditorPage', () => {
     beforeEach(async () => {
       TestBed.configureTestingModule({
         imports: [RecipeEditorPage],
-        providers: [provideRouter([]), provideStore(), provideState(authFeature), provideState(recipesFeature), provideState(catalogueFeature)],
+        providers: [provideRouter([]), provideStore(), provideState(authFeature), provideState(recipesFeature), provideState(catalogueFeature), provideState(unsavedEditsFeature)],
       });
       const store = TestBed.inject(Store);
       store.dispatch(CatalogueApiActions.catalogueLoadedSuccess({ catalogue }));
@@ -156,6 +160,7 @@ describe('RecipeEditorPage', () => {
               auth: initialAuthState,
               recipes: { ...recipesFeature.reducer(undefined, { type: 'init' }), current: generateMockRecipe({ editable: false, ownerName: 'Jonah Weiss' }) },
               catalogue: catalogueFeature.reducer(undefined, { type: 'init' }),
+              unsavedEdits: initialUnsavedEditsState,
             },
           }),
         ],
