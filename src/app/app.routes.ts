@@ -20,6 +20,7 @@ export const routes: Routes = [
       { path: '', pathMatch: 'full', redirectTo: 'today' },
       { path: 'today', title: 'Today · Commonwort', loadChildren: () => import('./today/today.routes').then((m) => m.todayRoutes) },
       { path: 'recipes', title: 'Recipes · Commonwort', loadChildren: () => import('./recipes/recipes.routes').then((m) => m.recipesRoutes) },
+      { path: 'kit-room', title: 'Kit room · Commonwort', loadChildren: () => import('./kit-room/kit-room.routes').then((m) => m.kitRoomRoutes) },
       {
         path: 'strength-check',
         title: 'Strength check · Commonwort',

@@ -21,7 +21,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Gravity log', path: '/gravity-log', icon: 'water_drop', available: false, roles: null, summary: 'Gravity readings of a batch.' },
   { label: 'Strength check', path: '/strength-check', icon: 'percent', available: true, roles: null, summary: 'Strength converter, blending planner and tolerances.' },
   { label: 'Reference tables', path: '/reference-tables', icon: 'table_chart', available: true, roles: null, summary: 'Density tables: the built-in equation and uploaded tables, audited.' },
-  { label: 'Kit room', path: '/kit-room', icon: 'kitchen', available: false, roles: null, summary: 'The shared kit and its bookings.' },
+  { label: 'Kit room', path: '/kit-room', icon: 'kitchen', available: true, roles: null, summary: 'The shared kit and its bookings.' },
   { label: 'Brew plan', path: '/brew-plan', icon: 'calendar_month', available: false, roles: null, summary: 'The production calendar.' },
   { label: 'Dues', path: '/dues', icon: 'payments', available: false, roles: null, summary: 'Plans, payments and receipts.' },
   {

@@ -34,13 +34,13 @@ describe('TodayPage', () => {
     const element = await render(['member']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/strength-check', '/reference-tables']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/strength-check', '/reference-tables', '/kit-room']);
   });
 
   it('shows a Members card linking to /members for an admin', async () => {
     const element = await render(['member', 'admin']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/strength-check', '/reference-tables', '/members']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/strength-check', '/reference-tables', '/kit-room', '/members']);
   });
 });

@@ -1,0 +1,16 @@
+import { AbstractControl, ValidationErrors } from '@angular/forms';
+import { DateTime } from 'luxon';
+
+/** A picked calendar day and a typed time, as the wall-clock text the API takes (yyyy-MM-ddTHH:mm). */
+export function wallClockOf(day: DateTime | null, time: string): string | null {
+  if (!day || !day.isValid || !/^\d{2}:\d{2}$/.test(time)) return null;
+  return `${day.toFormat('yyyy-MM-dd')}T${time}`;
+}
+
+/** The end must come after the start; wall-clock text compares in order. */
+export function endAfterStart(group: AbstractControl): ValidationErrors | null {
+  const value = group.value as { startDate: DateTime | null; startTime: string; endDate: DateTime | null; endTime: string };
+  const start = wallClockOf(value.startDate, value.startTime);
+  const end = wallClockOf(value.endDate, value.endTime);
+  return start && end && end <= start ? { endBeforeStart: true } : null;
+}

@@ -1,0 +1,87 @@
+import { ChangeDetectionStrategy, Component, effect, inject, input, output } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatCheckbox } from '@angular/material/checkbox';
+import { MatDatepicker, MatDatepickerInput, MatDatepickerToggle } from '@angular/material/datepicker';
+import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
+import { MatOption, MatSelect } from '@angular/material/select';
+import { DateTime } from 'luxon';
+import { BOOKING_LIMITS, CreateBookingRequest } from '@shared/bookings';
+import { KitItemSummary } from '@shared/kit';
+import { FieldErrors } from '@app/ui/server-field-errors';
+import { endAfterStart, wallClockOf } from './booking-form-model';
+
+/** Item, start and end (wall-clock, co-op zone) and a note; admins may block the item for maintenance instead. */
+@Component({
+  selector: 'cw-booking-form',
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatDatepicker, MatDatepickerInput, MatDatepickerToggle, MatCheckbox, MatButton],
+  templateUrl: './booking-form.html',
+  styleUrl: './booking-form.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class BookingForm {
+  readonly items = input.required<KitItemSummary[]>();
+  readonly timeZone = input.required<string>();
+  /** Today in the co-op's zone; earlier days cannot be picked. */
+  readonly today = input.required<DateTime>();
+  readonly isAdmin = input(false);
+  readonly pending = input(false);
+  readonly error = input<string | null>(null);
+  readonly fieldErrors = input<FieldErrors | null>(null);
+  /** Goes up by one per booking made; the form then clears its times. */
+  readonly createdCount = input(0);
+  readonly bookingSubmitted = output<CreateBookingRequest>();
+
+  protected readonly noteMaxLength = BOOKING_LIMITS.noteMaxLength;
+  private readonly fb = inject(NonNullableFormBuilder);
+  protected readonly form = this.fb.group(
+    {
+      kitItemId: this.fb.control<number | null>(null, Validators.required),
+      startDate: this.fb.control<DateTime | null>(null, Validators.required),
+      startTime: ['10:00', Validators.required],
+      endDate: this.fb.control<DateTime | null>(null, Validators.required),
+      endTime: ['10:00', Validators.required],
+      note: ['', Validators.maxLength(BOOKING_LIMITS.noteMaxLength)],
+      maintenance: [false],
+    },
+    { validators: endAfterStart },
+  );
+
+  constructor() {
+    effect(() => {
+      const fields = this.fieldErrors() ?? {};
+      const targets: Record<string, string> = { start: 'startDate', end: 'endDate', kitItemId: 'kitItemId', note: 'note' };
+      for (const [name, reason] of Object.entries(fields)) {
+        const control = this.form.get(targets[name] ?? name);
+        control?.setErrors({ ...control.errors, server: reason });
+        control?.markAsTouched();
+      }
+    });
+    let seen = this.createdCount();
+    effect(() => {
+      const count = this.createdCount();
+      if (count !== seen) {
+        seen = count;
+        this.form.patchValue({ startDate: null, endDate: null, note: '', maintenance: false });
+        this.form.markAsUntouched();
+      }
+    });
+  }
+
+  protected submit(): void {
+    if (this.pending()) return;
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    const value = this.form.getRawValue();
+    this.bookingSubmitted.emit({
+      kitItemId: value.kitItemId!,
+      start: wallClockOf(value.startDate, value.startTime)!,
+      end: wallClockOf(value.endDate, value.endTime)!,
+      note: value.note.trim() || undefined,
+      ...(value.maintenance ? { purpose: 'maintenance' as const } : {}),
+    });
+  }
+}

@@ -1,0 +1,36 @@
+import { Routes } from '@angular/router';
+import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
+import { provideEffects } from '@ngrx/effects';
+import { provideState } from '@ngrx/store';
+import { roleGuard } from '@app/auth/role-guard';
+import * as feedLinkEffects from './state/feed-link.effects';
+import * as kitRegisterEffects from './state/kit-register.effects';
+import * as kitRoomFeedbackEffects from './state/kit-room-feedback.effects';
+import * as kitRoomEffects from './state/kit-room.effects';
+import { kitRoomFeature } from './state/kit-room.feature';
+
+/** Dates typed as yyyy-MM-dd (unambiguous in any locale) and shown with the weekday. */
+const KIT_ROOM_DATE_FORMATS = {
+  parse: { dateInput: ['yyyy-MM-dd', 'd/M/yyyy', 'D'] },
+  display: { dateInput: 'yyyy-MM-dd', monthYearLabel: 'LLL yyyy', dateA11yLabel: 'DDD', monthYearA11yLabel: 'LLLL yyyy' },
+};
+
+export const kitRoomRoutes: Routes = [
+  {
+    path: '',
+    providers: [
+      provideState(kitRoomFeature),
+      provideEffects(kitRoomEffects, feedLinkEffects, kitRegisterEffects, kitRoomFeedbackEffects),
+      provideLuxonDateAdapter(KIT_ROOM_DATE_FORMATS),
+    ],
+    children: [
+      { path: '', loadComponent: () => import('./kit-room-page/kit-room-page').then((m) => m.KitRoomPage) },
+      {
+        path: 'register',
+        title: 'Kit register · Commonwort',
+        canActivate: [roleGuard(['admin'])],
+        loadComponent: () => import('./kit-register-page/kit-register-page').then((m) => m.KitRegisterPage),
+      },
+    ],
+  },
+];
