@@ -21,3 +21,10 @@ export function bookingConflict(existing: Booking): AppError {
   };
   return new AppError('booking-conflict', message, 409, undefined, undefined, { conflict });
 }
+
+/** The 409 for a request on a fermenter that a fermenting or conditioning batch holds until it is packaged. */
+export function batchHoldConflict(kitItemCode: string, batch: { id: number; name: string }): AppError {
+  const conflict: BookingConflict = { kind: 'batch', id: batch.id, kitItemCode, batchName: batch.name };
+  const message = `${kitItemCode} holds the batch "${batch.name}" (batch #${batch.id}) until it is packaged. Please choose another item.`;
+  return new AppError('booking-conflict', message, 409, undefined, undefined, { conflict });
+}

@@ -45,6 +45,7 @@ export interface BookingWrite {
   heldUntil: Date;
   timeZone: string;
   note: string;
+  batchId: number | null;
 }
 
 /** Data access for bookings. */
@@ -92,7 +93,7 @@ export const bookingsRepository = {
       ends_at: booking.endsAt,
       held_until: booking.heldUntil,
       time_zone: booking.timeZone,
-      batch_id: null,
+      batch_id: booking.batchId,
       note: booking.note,
     });
     return id;

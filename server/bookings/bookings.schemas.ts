@@ -11,6 +11,7 @@ export const createBookingSchema = z.strictObject({
   note: z.string().trim().max(BOOKING_LIMITS.noteMaxLength).optional(),
   userId: positiveId.optional(),
   purpose: z.enum(BOOKING_PURPOSES).optional(),
+  batchId: positiveId.optional(),
 });
 
 export const moveBookingSchema = z.strictObject({ start: wallClock, end: wallClock });

@@ -1,12 +1,11 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
-import { Booking, BookingPurpose, CreateBookingRequest, heldUntil, MoveBookingRequest } from '@shared/bookings';
+import { Booking, CreateBookingRequest, heldUntil, MoveBookingRequest } from '@shared/bookings';
 import { recordAudit } from '../audit/audit-log';
 import { retryOnDeadlock } from '../database/retry-on-deadlock';
 import { AppError, forbidden } from '../errors/app-error';
-import { kitRepository } from '../kit/kit.repository';
-import { usersRepository } from '../users/users.repository';
-import { bookingConflict } from './booking-conflict';
+import { assertItemFree, lockBookableItem } from './booking-holds';
+import { bookedFor, linkedBatch } from './booking-party';
 import { bookingTimes, calendarRange } from './booking-times';
 import { bookingsRepository } from './bookings.repository';
 import { DuesStanding, everyoneMayBook } from './dues-standing';
@@ -35,31 +34,6 @@ export function createBookingsService({ db, coopTimeZone, duesStanding = everyon
     return booking;
   }
 
-  /** Locks the item's row (every booking of it waits here) and refuses it when it is out of service. */
-  async function lockBookableItem(trx: Knex.Transaction, kitItemId: number, purpose: BookingPurpose) {
-    const item = await kitRepository.findById(trx, kitItemId, true);
-    if (!item) throw new AppError('kit-item-not-found', 'The kit register has no item with this id.', 404, { kitItemId: 'no such item' });
-    const blockingForMaintenance = purpose === 'maintenance' && item.state === 'maintenance';
-    if (item.state !== 'in_service' && !blockingForMaintenance) {
-      const state = item.state === 'maintenance' ? 'under maintenance' : 'retired';
-      throw new AppError('kit-unavailable', `${item.code} is ${state} and cannot be booked.`, 409);
-    }
-    return item;
-  }
-
-  async function assertFree(trx: Knex.Transaction, kitItemId: number, startsAt: Date, until: Date, exceptId?: number) {
-    const overlap = await bookingsRepository.firstOverlap(trx, kitItemId, startsAt, until, exceptId);
-    if (overlap) throw bookingConflict(overlap);
-  }
-
-  async function bookedFor(user: SessionUser, request: CreateBookingRequest): Promise<number> {
-    if (request.userId === undefined || request.userId === user.id) return user.id;
-    if (!isAdmin(user)) throw forbidden('Only an admin may book for someone else.');
-    const person = await usersRepository.findById(db, request.userId);
-    if (!person || !person.active) throw new AppError('validation-failed', 'Please check these fields: userId.', 400, { userId: 'no active member has this id' });
-    return person.id;
-  }
-
   return {
     assertMayBook,
     get,
@@ -77,14 +51,15 @@ export function createBookingsService({ db, coopTimeZone, duesStanding = everyon
       const purpose = request.purpose ?? 'use';
       if (purpose === 'maintenance' && !isAdmin(user)) throw forbidden('Only an admin may block an item for maintenance.');
       const { startsAt, endsAt } = bookingTimes(request.start, request.end, coopTimeZone);
-      const userId = await bookedFor(user, request);
+      const userId = await bookedFor(db, user, request);
+      const batchId = await linkedBatch(db, userId, request.batchId);
       if (purpose === 'use') await assertMayBook(userId);
       const id = await retryOnDeadlock(() =>
         db.transaction(async (trx) => {
           const item = await lockBookableItem(trx, request.kitItemId, purpose);
           // A maintenance block needs no cleaning after it.
           const until = heldUntil(endsAt, purpose === 'use' ? item.turnaroundHours : 0);
-          await assertFree(trx, item.id, startsAt, until);
+          await assertItemFree(trx, item, startsAt, until, { batchId });
           const newId = await bookingsRepository.insert(trx, {
             kitItemId: item.id,
             userId,
@@ -95,6 +70,7 @@ export function createBookingsService({ db, coopTimeZone, duesStanding = everyon
             heldUntil: until,
             timeZone: coopTimeZone,
             note: request.note ?? '',
+            batchId,
           });
           await recordAudit(trx, { actorUserId: user.id, action: 'booking-created', subjectType: 'booking', subjectId: newId, detail: { kitItemId: request.kitItemId, userId, purpose } });
           return newId;
@@ -111,8 +87,8 @@ export function createBookingsService({ db, coopTimeZone, duesStanding = everyon
       const until = new Date(endsAt.getTime() + turnaroundMs);
       await retryOnDeadlock(() =>
         db.transaction(async (trx) => {
-          await lockBookableItem(trx, existing.kitItemId, existing.purpose);
-          await assertFree(trx, existing.kitItemId, startsAt, until, id);
+          const item = await lockBookableItem(trx, existing.kitItemId, existing.purpose);
+          await assertItemFree(trx, item, startsAt, until, { exceptBookingId: id, batchId: existing.batchId });
           await bookingsRepository.moveTimes(trx, id, { startsAt, endsAt, heldUntil: until, timeZone: coopTimeZone });
           await recordAudit(trx, { actorUserId: user.id, action: 'booking-moved', subjectType: 'booking', subjectId: id, detail: { from: existing.startsAt, to: startsAt.toISOString() } });
         }),

@@ -25,6 +25,8 @@ export interface CreateBookingRequest {
   userId?: number;
   /** Admins only: 'maintenance' blocks the item. */
   purpose?: BookingPurpose;
+  /** One of the booked person's batches that the booking serves. */
+  batchId?: number;
 }
 
 export interface MoveBookingRequest {
@@ -32,15 +34,10 @@ export interface MoveBookingRequest {
   end: string;
 }
 
-/** What a 409 names: the reservation the request ran into. */
-export interface BookingConflict {
-  kind: 'booking';
-  id: number;
-  kitItemCode: string;
-  userName: string;
-  startsAt: string;
-  heldUntil: string;
-}
+/** What a 409 names: the reservation the request ran into, or the batch fermenting in the item. */
+export type BookingConflict =
+  | { kind: 'booking'; id: number; kitItemCode: string; userName: string; startsAt: string; heldUntil: string }
+  | { kind: 'batch'; id: number; kitItemCode: string; batchName: string };
 
 export interface BookingFeedLinkStatus {
   active: boolean;
