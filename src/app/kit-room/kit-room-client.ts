@@ -1,6 +1,7 @@
 import { HttpClient, HttpParams } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { Booking, BookingFeedLink, BookingFeedLinkStatus, BOOKINGS_PATH, CreateBookingRequest, MoveBookingRequest } from '@shared/bookings';
+import { BATCHES_PATH, BatchSummary } from '@shared/batches';
 import { KIT_PATH, KitItem, KitItemInput, KitItemSummary, MaintenanceEntry, MaintenanceEntryInput } from '@shared/kit';
 import { Observable } from 'rxjs';
 
@@ -34,6 +35,11 @@ export class KitRoomClient {
     let params = new HttpParams().set('from', from).set('to', to);
     if (kitItemId !== null) params = params.set('kitItemId', kitItemId);
     return this.http.get<Booking[]>(BOOKINGS_PATH, { params });
+  }
+
+  /** The caller's batches that are still under way, for linking a booking to one. */
+  myBatches(): Observable<BatchSummary[]> {
+    return this.http.get<BatchSummary[]>(BATCHES_PATH, { params: new HttpParams().set('mine', 'true') });
   }
 
   myBookings(): Observable<Booking[]> {

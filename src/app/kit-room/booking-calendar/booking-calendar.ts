@@ -5,6 +5,7 @@ import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { DatePipe } from '@angular/common';
+import { Booking } from '@shared/bookings';
 import { KitItemSummary } from '@shared/kit';
 import { CalendarView } from '../calendar-period';
 import { DayHold } from '../day-holds';
@@ -34,6 +35,9 @@ export class BookingCalendar {
   readonly periodStepped = output<-1 | 1>();
   readonly todayRequested = output<void>();
   readonly itemFilterChanged = output<number | null>();
+  /** Admins may open a booking from the calendar; for others the holds are plain text. */
+  readonly selectable = input(false);
+  readonly bookingSelected = output<Booking>();
 
   protected readonly weekdays = ['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];
   protected readonly hasHolds = computed(() => this.calendar().days.some((cell) => cell.holds.length > 0));

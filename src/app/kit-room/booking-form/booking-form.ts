@@ -10,6 +10,7 @@ import { DateTime } from 'luxon';
 import { BOOKING_LIMITS, CreateBookingRequest } from '@shared/bookings';
 import { KitItemSummary } from '@shared/kit';
 import { FieldErrors } from '@app/ui/server-field-errors';
+import { NamedChoice } from '../named-choice';
 import { endAfterStart, wallClockOf } from './booking-form-model';
 
 /** Item, start and end (wall-clock, co-op zone) and a note; admins may block the item for maintenance instead. */
@@ -26,6 +27,10 @@ export class BookingForm {
   /** Today in the co-op's zone; earlier days cannot be picked. */
   readonly today = input.required<DateTime>();
   readonly isAdmin = input(false);
+  /** My batches still under way; a booking may serve one. */
+  readonly batches = input<NamedChoice[]>([]);
+  /** Admins only: the people they may book for. */
+  readonly people = input<NamedChoice[]>([]);
   readonly pending = input(false);
   readonly error = input<string | null>(null);
   readonly fieldErrors = input<FieldErrors | null>(null);
@@ -44,6 +49,8 @@ export class BookingForm {
       endTime: ['10:00', Validators.required],
       note: ['', Validators.maxLength(BOOKING_LIMITS.noteMaxLength)],
       maintenance: [false],
+      batchId: this.fb.control<number | null>(null),
+      userId: this.fb.control<number | null>(null),
     },
     { validators: endAfterStart },
   );
@@ -51,7 +58,7 @@ export class BookingForm {
   constructor() {
     effect(() => {
       const fields = this.fieldErrors() ?? {};
-      const targets: Record<string, string> = { start: 'startDate', end: 'endDate', kitItemId: 'kitItemId', note: 'note' };
+      const targets: Record<string, string> = { start: 'startDate', end: 'endDate', kitItemId: 'kitItemId', note: 'note', batchId: 'batchId', userId: 'userId' };
       for (const [name, reason] of Object.entries(fields)) {
         const control = this.form.get(targets[name] ?? name);
         control?.setErrors({ ...control.errors, server: reason });
@@ -63,7 +70,7 @@ export class BookingForm {
       const count = this.createdCount();
       if (count !== seen) {
         seen = count;
-        this.form.patchValue({ startDate: null, endDate: null, note: '', maintenance: false });
+        this.form.patchValue({ startDate: null, endDate: null, note: '', maintenance: false, batchId: null });
         this.form.markAsUntouched();
       }
     });
@@ -82,6 +89,8 @@ export class BookingForm {
       end: wallClockOf(value.endDate, value.endTime)!,
       note: value.note.trim() || undefined,
       ...(value.maintenance ? { purpose: 'maintenance' as const } : {}),
+      ...(value.batchId !== null && !value.maintenance && value.userId === null ? { batchId: value.batchId } : {}),
+      ...(value.userId !== null && !value.maintenance ? { userId: value.userId } : {}),
     });
   }
 }

@@ -1,11 +1,12 @@
-import { ChangeDetectionStrategy, Component, computed, inject, OnInit } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, OnInit, signal } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { Store } from '@ngrx/store';
 import { DateTime } from 'luxon';
-import { CreateBookingRequest } from '@shared/bookings';
+import { Booking, CreateBookingRequest, MoveBookingRequest } from '@shared/bookings';
 import { authFeature } from '@app/auth/state/auth.feature';
+import { BookingAdminPanel } from '../booking-admin-panel/booking-admin-panel';
 import { BookingCalendar } from '../booking-calendar/booking-calendar';
 import { BookingForm } from '../booking-form/booking-form';
 import { CalendarView, stepPeriod } from '../calendar-period';
@@ -17,7 +18,7 @@ import { selectBookableItems, selectCalendarViewModel } from '../state/kit-room.
 
 @Component({
   selector: 'cw-kit-room-page',
-  imports: [BookingCalendar, BookingForm, MyBookings, FeedLinkPanel, RouterLink, MatButton, MatIcon],
+  imports: [BookingAdminPanel, BookingCalendar, BookingForm, MyBookings, FeedLinkPanel, RouterLink, MatButton, MatIcon],
   templateUrl: './kit-room-page.html',
   styleUrl: './kit-room-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -31,6 +32,8 @@ export class KitRoomPage implements OnInit {
   protected readonly items = this.store.selectSignal(kitRoomFeature.selectItems);
   protected readonly bookableItems = this.store.selectSignal(selectBookableItems);
   protected readonly myBookings = this.store.selectSignal(kitRoomFeature.selectMyBookings);
+  protected readonly myBatches = this.store.selectSignal(kitRoomFeature.selectMyBatches);
+  protected readonly people = this.store.selectSignal(kitRoomFeature.selectPeople);
   protected readonly loadError = this.store.selectSignal(kitRoomFeature.selectLoadError);
   protected readonly booking = this.store.selectSignal(kitRoomFeature.selectBooking);
   protected readonly bookingError = this.store.selectSignal(kitRoomFeature.selectBookingError);
@@ -41,6 +44,9 @@ export class KitRoomPage implements OnInit {
   protected readonly isAdmin = computed(() => this.user()?.roles.includes('admin') ?? false);
   protected readonly today = computed(() => DateTime.now().setZone(this.zone()).startOf('day'));
   protected readonly todayIso = computed(() => this.today().toISODate()!);
+  /** The booking an admin opened from the calendar, by id, so a moved booking shows its new times. */
+  protected readonly openedBookingId = signal<number | null>(null);
+  protected readonly openedBooking = computed(() => this.calendar()?.days.flatMap((day) => day.holds).find((hold) => hold.booking.id === this.openedBookingId())?.booking ?? null);
 
   ngOnInit(): void {
     this.store.dispatch(KitRoomPageActions.opened({ today: this.todayIso() }));
@@ -68,6 +74,19 @@ export class KitRoomPage implements OnInit {
   }
 
   protected cancel(bookingId: number): void {
+    this.store.dispatch(KitRoomPageActions.bookingCancelled({ bookingId }));
+  }
+
+  protected openBooking(booking: Booking): void {
+    this.openedBookingId.set(booking.id);
+  }
+
+  protected moveBooking(move: { bookingId: number; request: MoveBookingRequest }): void {
+    this.store.dispatch(KitRoomPageActions.bookingMoveSubmitted(move));
+  }
+
+  protected cancelOpened(bookingId: number): void {
+    this.openedBookingId.set(null);
     this.store.dispatch(KitRoomPageActions.bookingCancelled({ bookingId }));
   }
 

@@ -2,6 +2,7 @@ import { createActionGroup, emptyProps, props } from '@ngrx/store';
 import { Booking, BookingFeedLink, BookingFeedLinkStatus } from '@shared/bookings';
 import { KitItem, KitItemSummary, MaintenanceEntry } from '@shared/kit';
 import { FieldErrors } from '@app/ui/server-field-errors';
+import { NamedChoice } from '../named-choice';
 
 export const KitRoomApiActions = createActionGroup({
   source: 'Kit Room API',
@@ -12,6 +13,8 @@ export const KitRoomApiActions = createActionGroup({
     'Bookings Loaded Failure': props<{ message: string }>(),
     'My Bookings Loaded Success': props<{ bookings: Booking[] }>(),
     'My Bookings Loaded Failure': props<{ message: string }>(),
+    'My Batches Loaded Success': props<{ batches: NamedChoice[] }>(),
+    'People Loaded Success': props<{ people: NamedChoice[] }>(),
     'Booking Created Success': props<{ booking: Booking }>(),
     'Booking Created Failure': props<{ message: string; fields: FieldErrors | null }>(),
     'Booking Moved Success': props<{ booking: Booking }>(),

@@ -3,6 +3,8 @@ import { Actions, createEffect, ofType } from '@ngrx/effects';
 import { Store } from '@ngrx/store';
 import { catchError, exhaustMap, filter, map, mergeMap, of, switchMap, withLatestFrom } from 'rxjs';
 import { apiErrorMessage, apiFieldErrors } from '@app/core/api-error-message';
+import { authFeature } from '@app/auth/state/auth.feature';
+import { MembersClient } from '@app/members/members-client';
 import { KitRoomClient } from '../kit-room-client';
 import { KitRegisterPageActions } from './kit-register-page.actions';
 import { KitRoomApiActions } from './kit-room-api.actions';
@@ -98,6 +100,38 @@ export const cancelBooking = createEffect(
         client.cancel(bookingId).pipe(
           map(() => KitRoomApiActions.bookingCancelledSuccess({ bookingId })),
           catchError((error: unknown) => of(KitRoomApiActions.bookingCancelledFailure({ message: apiErrorMessage(error, 'The booking could not be cancelled.') }))),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+/** Batches are optional here: when they cannot be loaded the form simply offers none. */
+export const loadMyBatches = createEffect(
+  (actions$ = inject(Actions), client = inject(KitRoomClient)) =>
+    actions$.pipe(
+      ofType(KitRoomPageActions.opened),
+      switchMap(() =>
+        client.myBatches().pipe(
+          map((batches) => KitRoomApiActions.myBatchesLoadedSuccess({ batches: batches.map(({ id, name }) => ({ id, name })) })),
+          catchError(() => of(KitRoomApiActions.myBatchesLoadedSuccess({ batches: [] }))),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+/** Admins book for anyone: they get the list of active members to choose from. */
+export const loadPeople = createEffect(
+  (actions$ = inject(Actions), store = inject(Store), members = inject(MembersClient)) =>
+    actions$.pipe(
+      ofType(KitRoomPageActions.opened),
+      withLatestFrom(store.select(authFeature.selectUser)),
+      filter(([, user]) => user?.roles.includes('admin') ?? false),
+      switchMap(() =>
+        members.list().pipe(
+          map(({ members: all }) => KitRoomApiActions.peopleLoadedSuccess({ people: all.filter((m) => m.active).map(({ id, name }) => ({ id, name })) })),
+          catchError(() => of(KitRoomApiActions.peopleLoadedSuccess({ people: [] }))),
         ),
       ),
     ),

@@ -3,6 +3,7 @@ import { Booking } from '@shared/bookings';
 import { KitItemSummary, MaintenanceEntry } from '@shared/kit';
 import { AuthApiActions } from '@app/auth/state/auth-api.actions';
 import { FieldErrors } from '@app/ui/server-field-errors';
+import { NamedChoice } from '../named-choice';
 import { CalendarView } from '../calendar-period';
 import { KitRegisterPageActions } from './kit-register-page.actions';
 import { KitRoomApiActions } from './kit-room-api.actions';
@@ -13,6 +14,10 @@ export interface KitRoomState {
   /** Holds shown in the calendar's current period. */
   bookings: Booking[];
   myBookings: Booking[];
+  /** My batches still under way, offered as the batch a booking serves. */
+  myBatches: NamedChoice[];
+  /** Active members an admin may book for (empty for others). */
+  people: NamedChoice[];
   view: CalendarView;
   /** A day inside the period shown, yyyy-MM-dd in the co-op's zone. */
   anchor: string | null;
@@ -40,6 +45,8 @@ export const initialKitRoomState: KitRoomState = {
   items: [],
   bookings: [],
   myBookings: [],
+  myBatches: [],
+  people: [],
   view: 'week',
   anchor: null,
   itemFilter: null,
@@ -72,6 +79,8 @@ export const kitRoomFeature = createFeature({
     on(KitRoomPageActions.itemFilterChanged, (state, { kitItemId }): KitRoomState => ({ ...state, itemFilter: kitItemId })),
     on(KitRoomApiActions.itemsLoadedSuccess, (state, { items }): KitRoomState => ({ ...state, items })),
     on(KitRoomApiActions.bookingsLoadedSuccess, (state, { bookings }): KitRoomState => ({ ...state, bookings })),
+    on(KitRoomApiActions.peopleLoadedSuccess, (state, { people }): KitRoomState => ({ ...state, people })),
+    on(KitRoomApiActions.myBatchesLoadedSuccess, (state, { batches }): KitRoomState => ({ ...state, myBatches: batches })),
     on(KitRoomApiActions.myBookingsLoadedSuccess, (state, { bookings }): KitRoomState => ({ ...state, myBookings: bookings })),
     on(
       KitRoomApiActions.itemsLoadedFailure,
