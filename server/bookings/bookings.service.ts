@@ -2,7 +2,7 @@ import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { Booking, CreateBookingRequest, heldUntil, MoveBookingRequest } from '@shared/bookings';
 import { recordAudit } from '../audit/audit-log';
-import { retryOnDeadlock } from '../database/retry-on-deadlock';
+import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { AppError, forbidden } from '../errors/app-error';
 import { assertItemFree, lockBookableItem } from './booking-holds';
 import { bookedFor, linkedBatch } from './booking-party';
@@ -54,28 +54,26 @@ export function createBookingsService({ db, coopTimeZone, duesStanding = everyon
       const userId = await bookedFor(db, user, request);
       const batchId = await linkedBatch(db, userId, request.batchId);
       if (purpose === 'use') await assertMayBook(userId);
-      const id = await retryOnDeadlock(() =>
-        db.transaction(async (trx) => {
-          const item = await lockBookableItem(trx, request.kitItemId, purpose);
-          // A maintenance block needs no cleaning after it.
-          const until = heldUntil(endsAt, purpose === 'use' ? item.turnaroundHours : 0);
-          await assertItemFree(trx, item, startsAt, until, { batchId });
-          const newId = await bookingsRepository.insert(trx, {
-            kitItemId: item.id,
-            userId,
-            createdByUserId: user.id,
-            purpose,
-            startsAt,
-            endsAt,
-            heldUntil: until,
-            timeZone: coopTimeZone,
-            note: request.note ?? '',
-            batchId,
-          });
-          await recordAudit(trx, { actorUserId: user.id, action: 'booking-created', subjectType: 'booking', subjectId: newId, detail: { kitItemId: request.kitItemId, userId, purpose } });
-          return newId;
-        }),
-      );
+      const id = await transactionWithRetry(db, async (trx) => {
+        const item = await lockBookableItem(trx, request.kitItemId, purpose);
+        // A maintenance block needs no cleaning after it.
+        const until = heldUntil(endsAt, purpose === 'use' ? item.turnaroundHours : 0);
+        await assertItemFree(trx, item, startsAt, until, { batchId });
+        const newId = await bookingsRepository.insert(trx, {
+          kitItemId: item.id,
+          userId,
+          createdByUserId: user.id,
+          purpose,
+          startsAt,
+          endsAt,
+          heldUntil: until,
+          timeZone: coopTimeZone,
+          note: request.note ?? '',
+          batchId,
+        });
+        await recordAudit(trx, { actorUserId: user.id, action: 'booking-created', subjectType: 'booking', subjectId: newId, detail: { kitItemId: request.kitItemId, userId, purpose } });
+        return newId;
+      });
       return get(id);
     },
 
@@ -85,14 +83,12 @@ export function createBookingsService({ db, coopTimeZone, duesStanding = everyon
       const { startsAt, endsAt } = bookingTimes(request.start, request.end, coopTimeZone);
       const turnaroundMs = Date.parse(existing.heldUntil) - Date.parse(existing.endsAt);
       const until = new Date(endsAt.getTime() + turnaroundMs);
-      await retryOnDeadlock(() =>
-        db.transaction(async (trx) => {
-          const item = await lockBookableItem(trx, existing.kitItemId, existing.purpose);
-          await assertItemFree(trx, item, startsAt, until, { exceptBookingId: id, batchId: existing.batchId });
-          await bookingsRepository.moveTimes(trx, id, { startsAt, endsAt, heldUntil: until, timeZone: coopTimeZone });
-          await recordAudit(trx, { actorUserId: user.id, action: 'booking-moved', subjectType: 'booking', subjectId: id, detail: { from: existing.startsAt, to: startsAt.toISOString() } });
-        }),
-      );
+      await transactionWithRetry(db, async (trx) => {
+        const item = await lockBookableItem(trx, existing.kitItemId, existing.purpose);
+        await assertItemFree(trx, item, startsAt, until, { exceptBookingId: id, batchId: existing.batchId });
+        await bookingsRepository.moveTimes(trx, id, { startsAt, endsAt, heldUntil: until, timeZone: coopTimeZone });
+        await recordAudit(trx, { actorUserId: user.id, action: 'booking-moved', subjectType: 'booking', subjectId: id, detail: { from: existing.startsAt, to: startsAt.toISOString() } });
+      });
       return get(id);
     },
 
