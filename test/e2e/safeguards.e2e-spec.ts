@@ -103,3 +103,39 @@ describe('Members safeguards in the browser', () => {
     await context.close();
   }, 90_000);
 });
+
+describe('Phone-width lists and the brew-day sheet', () => {
+  const env = useE2eEnvironment();
+
+  it('when a member uses a 375 px phone, then the recipe list reads as cards and the brew-day sheet fits the screen', async () => {
+    const member = await createUser(env.server.db, ['member']);
+    const { tag } = await createCatalogueEntries(env.server.db);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl, { width: 375, height: 740 });
+    await signInPage.signIn(page, member.email, member.password);
+    await page.waitForURL(/\/today/);
+    await recipeEditorPage.openNew(page);
+    await recipeEditorPage.name(page, `Pocket porter with a rather long name ${tag}`);
+    await recipeEditorPage.addFermentable(page, `Test pale malt ${tag} · grain`, '4');
+    await recipeEditorPage.addHop(page, `Test hop ${tag} · 10 % AA · pellet`, '20', '60');
+    await recipeEditorPage.save(page, 1);
+
+    await page.getByRole('link', { name: 'Print' }).click();
+    await page.getByRole('heading', { level: 1, name: /^Brew day: Pocket porter/ }).waitFor();
+    const sheetOverflow = await page.evaluate(() =>
+      [...document.querySelectorAll('.cw-sheet table, .cw-sheet h1, .cw-sheet p')].filter((each) => each.getBoundingClientRect().right > window.innerWidth + 0.5).length,
+    );
+    expect(sheetOverflow).toBe(0);
+
+    await page.goto('/recipes');
+    const card = page.getByRole('row').filter({ hasText: `Pocket porter with a rather long name ${tag}` });
+    await card.waitFor();
+    const box = (await card.boundingBox())!;
+    expect(box.x).toBeGreaterThanOrEqual(0);
+    expect(box.x + box.width).toBeLessThanOrEqual(375);
+    expect(await card.textContent()).toMatch(/\d{1,2} \w{3} \d{4}, \d{2}:\d{2}/);
+    await page.getByLabel('Search recipes').fill('zzzz');
+    await page.getByText('No recipes match “zzzz”.').waitFor();
+    expect(await seriousA11yViolations(page)).toEqual([]);
+    await context.close();
+  }, 120_000);
+});

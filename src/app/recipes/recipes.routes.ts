@@ -5,6 +5,7 @@ import * as catalogueSnackBarEffects from '@app/catalogue/state/catalogue-snack-
 import * as catalogueEffects from '@app/catalogue/state/catalogue.effects';
 import { catalogueFeature } from '@app/catalogue/state/catalogue.feature';
 import * as preferencesEffects from './state/preferences.effects';
+import * as recipeArchiveConfirmationEffects from './state/recipe-archive-confirmation.effects';
 import * as recipeFileEffects from './state/recipe-file.effects';
 import * as recipeTitleEffects from './state/recipe-title.effects';
 import * as recipeVersionsEffects from './state/recipe-versions.effects';
@@ -23,6 +24,7 @@ export const recipesRoutes: Routes = [
       provideState(unsavedEditsFeature),
       provideEffects(
         recipeTitleEffects,
+        recipeArchiveConfirmationEffects,
         recipesEffects,
         recipeFileEffects,
         recipeVersionsEffects,

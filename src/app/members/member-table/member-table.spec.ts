@@ -24,14 +24,15 @@ describe('MemberTable', () => {
   const button = (element: HTMLElement, label: string) =>
     element.querySelector<HTMLButtonElement>(`button[aria-label="${label}"]`)!;
 
-  it('renders one row per member with name, e-mail and state', async () => {
+  it('renders one row per member with name, e-mail and state, sorted by name', async () => {
     const element = await render([jonah, ada]);
 
     const rows = [...element.querySelectorAll('tbody tr')];
     expect(rows).toHaveLength(2);
-    expect(rows[0].textContent).toContain('Jonah Weiss');
-    expect(rows[0].textContent).toContain('jonah.weiss@fernhollow.example');
-    expect(rows[0].textContent).toContain('Active');
+    expect(rows[0].textContent).toContain('Ada Okafor');
+    expect(rows[1].textContent).toContain('Jonah Weiss');
+    expect(rows[1].textContent).toContain('jonah.weiss@fernhollow.example');
+    expect(rows[1].textContent).toContain('Active');
   });
 
   it('marks the roles a member holds as pressed', async () => {

@@ -1,9 +1,10 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, model, output } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { Role, ROLES } from '@shared/auth';
 import { Member } from '@shared/members';
+import { ariaSort, nextSort, sortRows, TableSort } from '@app/ui/table-sort/table-sort';
 
 /** A role change asked for on one member. */
 export interface RolesChange {
@@ -16,6 +17,16 @@ export interface ActiveChange {
   memberId: number;
   active: boolean;
 }
+
+export type MemberColumn = 'name' | 'email' | 'state';
+
+const SORTABLE: { key: MemberColumn; label: string }[] = [
+  { key: 'name', label: 'Name' },
+  { key: 'email', label: 'E-mail' },
+];
+
+const valueOf = (member: Member, column: string): string =>
+  column === 'email' ? member.email : column === 'state' ? String(member.active) : member.name;
 
 /** The people of the co-op with their roles, state and the officer's actions on them. */
 @Component({
@@ -32,10 +43,14 @@ export class MemberTable {
   readonly rolesChanged = output<RolesChange>();
   readonly activeChanged = output<ActiveChange>();
   readonly resetLinkRequested = output<number>();
+  readonly sort = model<TableSort<MemberColumn>>({ column: 'name', direction: 'asc' });
+
+  protected readonly sortable = SORTABLE;
+  protected readonly ariaSort = (column: MemberColumn) => ariaSort(this.sort(), column);
 
   protected readonly rows = computed(() => {
     const saving = this.savingMemberIds();
-    return this.members().map((member) => ({
+    return sortRows(this.members(), this.sort(), valueOf).map((member) => ({
       member,
       saving: saving.includes(member.id),
       isYou: member.id === this.currentUserId(),
@@ -47,6 +62,10 @@ export class MemberTable {
       })),
     }));
   });
+
+  protected sortBy(column: MemberColumn): void {
+    this.sort.set(nextSort(this.sort(), column));
+  }
 
   protected toggleRole(member: Member, role: Role): void {
     const roles = member.roles.includes(role)

@@ -8,6 +8,7 @@ import { RecipesClient } from '../recipes-client';
 import { RecipeEditorPageActions } from './recipe-editor-page.actions';
 import { RecipeListPageActions } from './recipe-list-page.actions';
 import { RecipeVersionsPageActions } from './recipe-versions-page.actions';
+import { RecipeArchiveConfirmationActions } from './recipe-archive-confirmation.actions';
 import { RecipesApiActions } from './recipes-api.actions';
 import { exportRecipe, importRecipe } from './recipe-file.effects';
 import { loadVersionPair } from './recipe-versions.effects';
@@ -57,7 +58,7 @@ describe('recipes effects', () => {
     const recipe = generateMockRecipe({ archived: true });
     const client = fakeClient({ update: jest.fn(() => of(recipe)) });
 
-    const result = await firstValueFrom(updateRecipe(actionsOf(RecipeEditorPageActions.archiveToggled({ recipeId: 41, archived: true })), client));
+    const result = await firstValueFrom(updateRecipe(actionsOf(RecipeArchiveConfirmationActions.archiveConfirmed({ recipeId: 41, archived: true })), client));
 
     expect(client.update).toHaveBeenCalledWith(41, { archived: true });
     expect(result).toEqual(RecipesApiActions.recipeUpdatedSuccess({ recipe }));

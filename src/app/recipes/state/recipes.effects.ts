@@ -9,6 +9,7 @@ import { BrewDaySheetPageActions } from './brew-day-sheet-page.actions';
 import { RecipeEditorPageActions } from './recipe-editor-page.actions';
 import { RecipeListPageActions } from './recipe-list-page.actions';
 import { RecipeVersionsPageActions } from './recipe-versions-page.actions';
+import { RecipeArchiveConfirmationActions } from './recipe-archive-confirmation.actions';
 import { RecipesApiActions } from './recipes-api.actions';
 import { recipesFeature } from './recipes.feature';
 
@@ -61,7 +62,7 @@ export const saveRecipe = createEffect(
 export const updateRecipe = createEffect(
   (actions$ = inject(Actions), client = inject(RecipesClient)) =>
     actions$.pipe(
-      ofType(RecipeEditorPageActions.visibilityChanged, RecipeEditorPageActions.archiveToggled),
+      ofType(RecipeEditorPageActions.visibilityChanged, RecipeArchiveConfirmationActions.archiveConfirmed),
       concatMap((action) =>
         client.update(action.recipeId, 'visibility' in action ? { visibility: action.visibility } : { archived: action.archived }).pipe(
           map((recipe) => RecipesApiActions.recipeUpdatedSuccess({ recipe })),

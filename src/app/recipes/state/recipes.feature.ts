@@ -6,6 +6,7 @@ import { BrewDaySheetPageActions } from './brew-day-sheet-page.actions';
 import { RecipeEditorPageActions } from './recipe-editor-page.actions';
 import { RecipeListPageActions } from './recipe-list-page.actions';
 import { RecipeVersionsPageActions } from './recipe-versions-page.actions';
+import { RecipeArchiveConfirmationActions } from './recipe-archive-confirmation.actions';
 import { RecipesApiActions } from './recipes-api.actions';
 
 export interface RecipesState extends EntityState<RecipeSummary> {
@@ -97,7 +98,7 @@ export const recipesFeature = createFeature({
       draft: design,
       draftRevision: state.draftRevision + 1,
     })),
-    on(RecipeEditorPageActions.saveSubmitted, RecipeEditorPageActions.visibilityChanged, RecipeEditorPageActions.archiveToggled,
+    on(RecipeEditorPageActions.saveSubmitted, RecipeEditorPageActions.visibilityChanged, RecipeArchiveConfirmationActions.archiveConfirmed,
       RecipeEditorPageActions.cloneRequested, (state): RecipesState => ({ ...state, saving: true })),
     on(RecipesApiActions.recipeSavedFailure, RecipesApiActions.recipeUpdatedFailure, RecipesApiActions.recipeClonedFailure,
       (state): RecipesState => ({ ...state, saving: false })),
