@@ -1,4 +1,6 @@
 import type { Knex } from 'knex';
+import { CATALOGUE_KINDS } from '../server/catalogue/catalogue-kinds';
+import { catalogueRepository } from '../server/catalogue/catalogue.repository';
 
 // A starter catalogue with generic descriptive names. Extract yields, colours, alpha acids and
 // attenuation ranges are typical figures of the trade (common practice), rounded; a co-op edits them
@@ -48,30 +50,29 @@ const OTHERS = [
   ['Yeast nutrient', 'other'],
 ] as const;
 
+/** Adds each entry, with its ingredient identity, unless an entry of that name exists. */
+async function addMissing(knex: Knex, kind: keyof typeof CATALOGUE_KINDS, entries: Record<string, unknown>[]): Promise<void> {
+  const spec = CATALOGUE_KINDS[kind];
+  await knex.transaction(async (trx) => {
+    const taken = await catalogueRepository.idsByEqualName(trx, spec, entries.map((entry) => String(entry.name)));
+    for (const [index, entry] of entries.entries()) if (!taken.has(index)) await catalogueRepository.insert(trx, spec, entry);
+  });
+}
+
 export async function seed(knex: Knex): Promise<void> {
-  await knex('fermentables')
-    .insert(FERMENTABLES.map(([name, kind, extract, colour, maxShare]) => ({ name, kind, extract_percent: extract, colour_lovibond: colour, max_share_percent: maxShare })))
-    .onConflict('name')
-    .ignore();
-  await knex('hops')
-    .insert(HOPS.map(([name, alpha, form]) => ({ name, alpha_acid_percent: alpha, form })))
-    .onConflict('name')
-    .ignore();
-  await knex('yeasts')
-    .insert(
-      YEASTS.map(([name, attMin, attMax, tMin, tMax, flocculation]) => ({
-        name,
-        attenuation_min_percent: attMin,
-        attenuation_max_percent: attMax,
-        temperature_min_c: tMin,
-        temperature_max_c: tMax,
-        flocculation,
-      })),
-    )
-    .onConflict('name')
-    .ignore();
-  await knex('other_additions')
-    .insert(OTHERS.map(([name, kind]) => ({ name, kind })))
-    .onConflict('name')
-    .ignore();
+  await addMissing(knex, 'fermentables', FERMENTABLES.map(([name, kind, extractPercent, colourLovibond, maxSharePercent]) => ({ name, kind, extractPercent, colourLovibond, maxSharePercent })));
+  await addMissing(knex, 'hops', HOPS.map(([name, alphaAcidPercent, form]) => ({ name, alphaAcidPercent, form })));
+  await addMissing(
+    knex,
+    'yeasts',
+    YEASTS.map(([name, attenuationMinPercent, attenuationMaxPercent, temperatureMinC, temperatureMaxC, flocculation]) => ({
+      name,
+      attenuationMinPercent,
+      attenuationMaxPercent,
+      temperatureMinC,
+      temperatureMaxC,
+      flocculation,
+    })),
+  );
+  await addMissing(knex, 'others', OTHERS.map(([name, kind]) => ({ name, kind })));
 }

@@ -1,5 +1,7 @@
 import type { Knex } from 'knex';
 import { RecipeDesign } from '../shared/recipes';
+import { snapshotFor } from '../server/recipes/recipe-snapshot';
+import { recipesRepository } from '../server/recipes/recipes.repository';
 
 // Demo recipes of the invented co-op, one for each demo batch; amounts are invented for the demo.
 export interface DemoRecipe {
@@ -65,7 +67,7 @@ export async function seed(knex: Knex): Promise<void> {
       yeastId: yeasts.get(demo.yeast) ?? null,
       others: [],
     };
-    const [id] = (await knex('recipes').insert({ owner_user_id: ownerId, name: design.name, visibility: demo.visibility, cloned_from_recipe_id: null })) as unknown as number[];
-    await knex('recipe_versions').insert({ recipe_id: id, version: 1, design: JSON.stringify(design), created_by_user_id: ownerId });
+    const stored = await snapshotFor(knex, design, null);
+    await knex.transaction((trx) => recipesRepository.insert(trx, { ownerId, visibility: demo.visibility, stored }));
   }
 }

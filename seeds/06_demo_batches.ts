@@ -1,5 +1,5 @@
 import type { Knex } from 'knex';
-import { RecipeDesign } from '../shared/recipes';
+import { recipesRepository } from '../server/recipes/recipes.repository';
 import { correctedGravity } from '../shared/readings';
 import { predictVersion } from '../server/recipes/version-prediction';
 
@@ -66,9 +66,9 @@ export async function seed(knex: Knex): Promise<void> {
     const recipe = await knex('recipes').where({ name: demo.recipe }).first('id', 'current_version');
     const fermenter = await knex('kit_items').where({ code: demo.fermenter }).first('id');
     if (!brewer || !recipe || !fermenter) continue;
-    const version = await knex('recipe_versions').where({ recipe_id: recipe.id, version: recipe.current_version }).first('design');
-    const design = version!.design as RecipeDesign;
-    const predicted = await predictVersion(knex, design);
+    const version = (await recipesRepository.findVersion(knex, recipe.id, recipe.current_version))!;
+    const design = version.design;
+    const predicted = predictVersion(version);
     const brewDate = dayStart(demo.brewDay);
     const pitchedAt = new Date(brewDate.getTime() + 17 * HOUR);
     const dates = demo.status === 'planned' ? {} : { brewing_at: new Date(brewDate.getTime() + 9 * HOUR), fermenting_at: pitchedAt };

@@ -26,9 +26,11 @@ import { createInvitationsRouter, createInvitationsService } from './invitations
 import { createMembersRouter, createMembersService } from './members';
 import { createPasswordResetsRouter, createPasswordResetsService } from './password-resets';
 import { createBrewhouseRouter } from './brewhouse/brewhouse.routes';
-import { createCatalogueRouter } from './catalogue/catalogue.routes';
+import { createBrewhouseService } from './brewhouse/brewhouse.service';
+import { CATALOGUE_IMPORT_BODY_LIMIT, CATALOGUE_IMPORT_PATH, createCatalogueRouter } from './catalogue/catalogue.routes';
 import { createCatalogueService } from './catalogue/catalogue.service';
 import { createPreferencesRouter } from './preferences/preferences.routes';
+import { createPreferencesService } from './preferences/preferences.service';
 import { limitPerAddress } from './rate-limits/limit-per-address';
 import { RateLimit } from './rate-limits/rate-limiter';
 import { createProfileRouter, createProfileService } from './profile';
@@ -96,6 +98,7 @@ export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAU
   app.use(requestLogger(logger));
   app.use(securityHeaders());
   app.use(compression());
+  app.use(CATALOGUE_IMPORT_PATH, express.json({ limit: CATALOGUE_IMPORT_BODY_LIMIT }));
   app.use('/api', express.json({ limit: '100kb' }), wellFormedBody);
 
   const hasher = createPasswordHasher(config.bcryptCost);
@@ -117,12 +120,13 @@ export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAU
   mountApi(app, '/api/invitations', createInvitationsRouter(invitations, limitPerAddress(db, 'invitation-acceptance', publicRequestLimit)));
   mountApi(app, '/api/password-resets', createPasswordResetsRouter(resets, limitPerAddress(db, 'password-reset', publicRequestLimit)));
   mountApi(app, '/api/members', createMembersRouter(createMembersService(db, invitations), resets));
-  mountApi(app, '/api/preferences', createPreferencesRouter(db));
+  mountApi(app, '/api/preferences', createPreferencesRouter(createPreferencesService(db)));
   mountApi(app, '/api/profile', createProfileRouter(createProfileService({ db, hasher })));
   mountApi(app, '/api/ingredients', createCatalogueRouter(createCatalogueService(db)));
   mountApi(app, '/api/styles', createStylesRouter(createStylesService(db)));
-  mountApi(app, '/api/brewhouse', createBrewhouseRouter(db));
-  mountApi(app, '/api/recipes', createRecipesRouter(recipes, db));
+  const brewhouse = createBrewhouseService(db);
+  mountApi(app, '/api/brewhouse', createBrewhouseRouter(brewhouse));
+  mountApi(app, '/api/recipes', createRecipesRouter(recipes));
   mountApi(app, '/api/batches', createBatchesRouter(createBatchesService(db, recipes), db));
   mountApi(app, '/api/batches', createBatchReadingsRouter(readings, pushTokens, db, config.coopTimeZone));
   mountApi(app, '/api/readings', createReadingsRouter(readings));

@@ -4,7 +4,7 @@ import { Config } from './config';
 import { Role } from '@shared/auth';
 import { BookingPurpose } from '@shared/bookings';
 import { KitKind, KitState } from '@shared/kit';
-import { RecipeDesign } from '@shared/recipes';
+import { IngredientKind } from '@shared/recipes';
 import { BatchPrediction, BatchStatus } from '@shared/batches';
 import { GravityUnit, ImportMode, Instrument, ReadingSource } from '@shared/readings';
 
@@ -69,13 +69,33 @@ export interface RecipeRow {
   updated_at: Date;
 }
 
+/** JSON columns arrive as text or parsed, by driver version: repositories parse and check them. */
 export interface RecipeVersionRow {
   id: number;
   recipe_id: number;
   version: number;
-  design: RecipeDesign;
+  design: unknown;
+  design_format: number;
+  ingredients: unknown;
+  brewhouse: unknown;
   created_by_user_id: number;
   created_at: Date;
+}
+
+export interface IngredientRow {
+  id: number;
+  kind: IngredientKind;
+  created_at: Date;
+}
+
+export interface RecipeVersionItemRow {
+  id: number;
+  recipe_version_id: number;
+  position: number;
+  ingredient_id: number;
+  amount: number;
+  amount_unit: 'kg' | 'L' | 'each';
+  use: string;
 }
 
 export interface KitItemRow {
@@ -347,7 +367,13 @@ declare module 'knex/types/tables' {
     invitations: Knex.CompositeTableType<InvitationRow, Omit<InvitationRow, 'id' | 'created_at' | 'accepted_at' | 'revoked_at' | 'roles'> & { roles: string }, Partial<InvitationRow>>;
     password_resets: Knex.CompositeTableType<PasswordResetRow, Omit<PasswordResetRow, 'id' | 'created_at' | 'used_at'>, Partial<PasswordResetRow>>;
     recipes: Knex.CompositeTableType<RecipeRow, Omit<RecipeRow, 'id' | 'created_at' | 'updated_at' | 'archived_at' | 'current_version'> & { current_version?: number }, Partial<RecipeRow>>;
-    recipe_versions: Knex.CompositeTableType<RecipeVersionRow, Omit<RecipeVersionRow, 'id' | 'created_at' | 'design'> & { design: string }>;
+    recipe_versions: Knex.CompositeTableType<
+      RecipeVersionRow,
+      Omit<RecipeVersionRow, 'id' | 'created_at' | 'design' | 'ingredients' | 'brewhouse'> & { design: string; ingredients: string; brewhouse: string },
+      Partial<Omit<RecipeVersionRow, 'design' | 'ingredients' | 'brewhouse'>> & { design?: string; ingredients?: string; brewhouse?: string }
+    >;
+    recipe_version_items: Knex.CompositeTableType<RecipeVersionItemRow, Omit<RecipeVersionItemRow, 'id'>>;
+    ingredients: Knex.CompositeTableType<IngredientRow, Omit<IngredientRow, 'id' | 'created_at'>>;
     kit_items: Knex.CompositeTableType<KitItemRow, Omit<KitItemRow, 'id' | 'created_at' | 'updated_at' | 'state' | 'notes' | 'capacity_litres'> & { state?: KitState; notes?: string; capacity_litres: number | null }, Partial<Omit<KitItemRow, 'capacity_litres'>> & { capacity_litres?: number | null }>;
     dues_plans: Knex.CompositeTableType<DuesPlanRow, Pick<DuesPlanRow, 'name' | 'amount_cents' | 'currency' | 'period'> & { created_by_user_id?: number | null }, Partial<DuesPlanRow>>;
     dues_memberships: Knex.CompositeTableType<DuesMembershipRow, Omit<Partial<DuesMembershipRow>, 'paid_through'> & { user_id: number; paid_through?: DateInput | null }, Omit<Partial<DuesMembershipRow>, 'paid_through'> & { paid_through?: DateInput | null }>;

@@ -25,9 +25,19 @@ describe('parseCatalogueCsv', () => {
     expect(result.problems[2].reason).toBe('form must be one of pellet, whole, extract');
   });
 
-  it('when a name appears twice in the file, then the second line is reported', () => {
-    const result = parseCatalogueCsv(hops, 'name,alphaAcidPercent,form\nTwin,5,pellet\ntwin,6,pellet');
-    expect(result.problems).toEqual([{ line: 3, reason: 'name "twin" appears twice in the file' }]);
+  it('when a row has too few or too many values, then it is reported and the rows after it are still checked', () => {
+    const result = parseCatalogueCsv(hops, 'name,alphaAcidPercent,form\nShort,5\nGood,5,pellet\nLong,5,pellet,extra\nBad,abc,pellet');
+    expect(result.problems).toEqual([
+      { line: 2, reason: 'has 2 values where the header names 3 columns' },
+      { line: 4, reason: 'has 4 values where the header names 3 columns' },
+      { line: 5, reason: 'alphaAcidPercent must be a number' },
+    ]);
+    expect(result.rows.map((r) => r.line)).toEqual([3]);
+  });
+
+  it.each(['0x10', '1e1', 'Infinity', '12abc', '0b1'])('when a number is written as %s, then it is refused rather than read as a number', (raw) => {
+    const result = parseCatalogueCsv(hops, `name,alphaAcidPercent,form\nOdd,${raw},pellet`);
+    expect(result.problems).toEqual([{ line: 2, reason: 'alphaAcidPercent must be a number' }]);
   });
 
   it('when the file is not CSV, then line-numbered problems explain it', () => {

@@ -8,50 +8,67 @@ export interface ParsedCatalogueCsv {
   problems: CatalogueImportProblem[];
 }
 
+// Plain decimals only, with a point or a comma: "0x10", "1e3", "Infinity" and "12abc" are refused,
+// though Number() would take some of them.
+const DECIMAL = /^[+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+)$/;
+
 function toValue(spec: CatalogueKind, field: string, raw: string): unknown {
   if (!spec.numericFields.includes(field)) return raw;
-  if (raw.trim() === '') return null;
-  return Number(raw.replace(',', '.'));
+  const text = raw.trim();
+  if (text === '') return null;
+  return DECIMAL.test(text) ? Number(text.replace(',', '.')) : text;
 }
 
-function readRecords(csv: string): { records: { record: Record<string, string>; line: number }[]; header: string[] } | CatalogueImportProblem {
+type Record_ = { record: string[]; info: { lines: number } };
+
+/** Every record of the file with its line; records the parser cannot read become problems, and reading goes on. */
+function readRecords(csv: string): { records: { fields: string[]; line: number }[]; problems: CatalogueImportProblem[] } {
+  const problems: CatalogueImportProblem[] = [];
   try {
-    const parsed = parse(csv, { columns: true, skip_empty_lines: true, trim: true, info: true, bom: true }) as {
-      record: Record<string, string>;
-      info: { lines: number };
-    }[];
-    const header = parse(csv, { to_line: 1, trim: true, bom: true })[0] as string[] | undefined;
-    return { records: parsed.map((p) => ({ record: p.record, line: p.info.lines })), header: header ?? [] };
+    const parsed = parse(csv, {
+      skip_empty_lines: true,
+      trim: true,
+      info: true,
+      bom: true,
+      relax_column_count: true,
+      skip_records_with_error: true,
+      on_skip: (error: { lines?: number; message: string } | undefined) => {
+        if (error) problems.push({ line: error.lines ?? 1, reason: `this line is not valid CSV: ${error.message}` });
+      },
+    }) as unknown as Record_[];
+    return { records: parsed.map((p) => ({ fields: p.record, line: p.info.lines })), problems };
   } catch (error) {
     const line = (error as { lines?: number }).lines ?? 1;
-    return { line, reason: `the file is not valid CSV: ${(error as Error).message}` };
+    return { records: [], problems: [...problems, { line, reason: `the file is not valid CSV: ${(error as Error).message}` }] };
   }
 }
 
-/** Parses and validates a CSV whose header names the entry's fields (e.g. name,kind,extractPercent,…). */
+/** Parses and validates a CSV whose header names the entry's fields; every bad row is reported by its line. */
 export function parseCatalogueCsv(spec: CatalogueKind, csv: string): ParsedCatalogueCsv {
   const read = readRecords(csv);
-  if ('reason' in read) return { rows: [], problems: [read] };
+  const [headerRecord, ...dataRecords] = read.records;
+  const header = headerRecord?.fields ?? [];
   const expected = [...CATALOGUE_CSV_COLUMNS[spec.kind]];
-  const missing = expected.filter((field) => !read.header.includes(field));
-  const unknown = read.header.filter((field) => !expected.includes(field));
+  const missing = expected.filter((field) => !header.includes(field));
+  const unknown = header.filter((field) => !expected.includes(field));
   if (missing.length || unknown.length) {
     const parts = [missing.length ? `missing columns: ${missing.join(', ')}` : '', unknown.length ? `unknown columns: ${unknown.join(', ')}` : ''];
     return { rows: [], problems: [{ line: 1, reason: `${parts.filter(Boolean).join('; ')} (expected ${expected.join(',')})` }] };
   }
-  const result: ParsedCatalogueCsv = { rows: [], problems: [] };
-  const seen = new Set<string>();
-  for (const { record, line } of read.records) {
-    const input = Object.fromEntries(expected.map((field) => [field, toValue(spec, field, record[field] ?? '')]));
+  const result: ParsedCatalogueCsv = { rows: [], problems: [...read.problems] };
+  for (const { fields, line } of dataRecords) {
+    if (fields.length !== header.length) {
+      result.problems.push({ line, reason: `has ${fields.length} values where the header names ${header.length} columns` });
+      continue;
+    }
+    const input = Object.fromEntries(expected.map((field) => [field, toValue(spec, field, fields[header.indexOf(field)] ?? '')]));
     const checked = spec.schema.safeParse(input);
     if (!checked.success) {
       result.problems.push({ line, reason: checked.error.issues.map((i) => `${i.path.join('.')} ${i.message}`).join('; ') });
       continue;
     }
-    const key = String(checked.data.name).toLowerCase();
-    if (seen.has(key)) result.problems.push({ line, reason: `name "${checked.data.name}" appears twice in the file` });
-    seen.add(key);
     result.rows.push({ line, entry: checked.data });
   }
+  result.problems.sort((a, b) => a.line - b.line);
   return result;
 }

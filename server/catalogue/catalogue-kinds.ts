@@ -1,9 +1,18 @@
 import { z } from 'zod';
-import { FERMENTABLE_KINDS, FLOCCULATION_LEVELS, HOP_FORMS, IngredientKind, OTHER_ADDITION_KINDS } from '@shared/recipes';
+import {
+  CATALOGUE_LIMITS,
+  FERMENTABLE_KINDS,
+  FLOCCULATION_LEVELS,
+  HOP_FORMS,
+  IngredientKind,
+  NAME_MAX_LENGTH,
+  NumberLimit,
+  OTHER_ADDITION_KINDS,
+} from '@shared/recipes';
 
-const name = z.string('must be text').trim().min(1, 'must not be empty').max(100, 'must be at most 100 characters');
-const between = (min: number, max: number, unit = '') =>
-  z.number('must be a number').min(min, `must be at least ${min}${unit}`).max(max, `must be at most ${max}${unit}`);
+const name = z.string('must be text').trim().min(1, 'must not be empty').max(NAME_MAX_LENGTH, `must be at most ${NAME_MAX_LENGTH} characters`);
+const between = ({ min, max, unit }: NumberLimit) =>
+  z.number('must be a number').min(min, `must be at least ${min} ${unit}`).max(max, `must be at most ${max} ${unit}`);
 
 /** How one kind of catalogue entry is validated and stored. */
 export interface CatalogueKind {
@@ -18,24 +27,24 @@ export interface CatalogueKind {
 const fermentableSchema = z.object({
   name,
   kind: z.enum(FERMENTABLE_KINDS, `must be one of ${FERMENTABLE_KINDS.join(', ')}`),
-  extractPercent: between(0, 100, ' %'),
-  colourLovibond: between(0, 600, ' °L'),
-  maxSharePercent: between(0, 100, ' %').nullable(),
+  extractPercent: between(CATALOGUE_LIMITS.extractPercent),
+  colourLovibond: between(CATALOGUE_LIMITS.colourLovibond),
+  maxSharePercent: between(CATALOGUE_LIMITS.maxSharePercent).nullable(),
 });
 
 const hopSchema = z.object({
   name,
-  alphaAcidPercent: between(0, 100, ' %'),
+  alphaAcidPercent: between(CATALOGUE_LIMITS.alphaAcidPercent),
   form: z.enum(HOP_FORMS, `must be one of ${HOP_FORMS.join(', ')}`),
 });
 
 const yeastSchema = z
   .object({
     name,
-    attenuationMinPercent: between(0, 100, ' %'),
-    attenuationMaxPercent: between(0, 100, ' %'),
-    temperatureMinC: between(-5, 50, ' °C'),
-    temperatureMaxC: between(-5, 50, ' °C'),
+    attenuationMinPercent: between(CATALOGUE_LIMITS.attenuationPercent),
+    attenuationMaxPercent: between(CATALOGUE_LIMITS.attenuationPercent),
+    temperatureMinC: between(CATALOGUE_LIMITS.temperatureC),
+    temperatureMaxC: between(CATALOGUE_LIMITS.temperatureC),
     flocculation: z.enum(FLOCCULATION_LEVELS, `must be one of ${FLOCCULATION_LEVELS.join(', ')}`),
   })
   .refine((y) => y.attenuationMinPercent <= y.attenuationMaxPercent, { path: ['attenuationMaxPercent'], message: 'must not be below the minimum' })

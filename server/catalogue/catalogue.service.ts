@@ -1,11 +1,13 @@
 import { Knex } from 'knex';
 import { z } from 'zod';
-import { CatalogueImportResult, IngredientCatalogue, IngredientKind } from '@shared/recipes';
+import { SessionUser } from '@shared/auth';
+import { CatalogueImportResult, ImportChoice, IngredientCatalogue, IngredientKind, IngredientUsage } from '@shared/recipes';
 import { recordAudit } from '../audit/audit-log';
 import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { AppError } from '../errors/app-error';
 import { parseRequest } from '../http/parse-request';
-import { parseCatalogueCsv } from './catalogue-csv';
+import { ingredientUsage } from '../recipes/ingredient-usage';
+import { checkImport, importResult } from './catalogue-import';
 import { CATALOGUE_KINDS, CatalogueKind } from './catalogue-kinds';
 import { catalogueRepository } from './catalogue.repository';
 
@@ -20,16 +22,24 @@ function patchSchemaOf(spec: CatalogueKind) {
 }
 
 const nameTaken = () => new AppError('name-taken', 'The catalogue already has an entry with this name.', 409, { name: 'is already in the catalogue' });
+const notFound = () => new AppError('ingredient-not-found', 'No catalogue entry has this id.', 404);
+
+/** Runs a write; a unique-name clash becomes a 409 naming the field. */
+async function checkedWrite<T>(write: () => Promise<T>): Promise<T> {
+  try {
+    return await write();
+  } catch (error) {
+    if (isDuplicate(error)) throw nameTaken();
+    throw error;
+  }
+}
 
 /** The co-op's ingredient catalogue: anyone reads it; brewers and admins keep it. */
 export function createCatalogueService(db: Knex) {
-  async function insertChecked(trx: Knex, kind: IngredientKind, entry: Record<string, unknown>): Promise<number> {
-    try {
-      return await catalogueRepository.insert(trx, CATALOGUE_KINDS[kind], entry);
-    } catch (error) {
-      if (isDuplicate(error)) throw nameTaken();
-      throw error;
-    }
+  async function existing(kind: IngredientKind, id: number): Promise<Record<string, unknown>> {
+    const entry = await catalogueRepository.findById(db, CATALOGUE_KINDS[kind], id);
+    if (!entry) throw notFound();
+    return entry;
   }
 
   return {
@@ -40,52 +50,75 @@ export function createCatalogueService(db: Knex) {
       return { fermentables, hops, yeasts, others } as unknown as IngredientCatalogue;
     },
 
+    /** Adds an entry and its audit entry in one transaction. */
     async create(actorId: number, kind: IngredientKind, body: unknown): Promise<Record<string, unknown>> {
       const spec = CATALOGUE_KINDS[kind];
       const entry = parseRequest(spec.schema, body);
-      const id = await insertChecked(db, kind, entry);
-      await recordAudit(db, { actorUserId: actorId, action: 'ingredient-added', subjectType: spec.table, subjectId: id });
-      return (await catalogueRepository.findById(db, spec, id))!;
+      const id = await checkedWrite(() =>
+        transactionWithRetry(db, async (trx) => {
+          const newId = await catalogueRepository.insert(trx, spec, entry);
+          await recordAudit(trx, { actorUserId: actorId, action: 'ingredient-added', subjectType: spec.table, subjectId: newId });
+          return newId;
+        }),
+      );
+      return existing(kind, id);
     },
 
     /** Changes some fields and/or retires; unknown fields are refused, the merged entry is validated whole, and only validated changes are audited with the update. */
     async update(actorId: number, kind: IngredientKind, id: number, body: Record<string, unknown>): Promise<Record<string, unknown>> {
       const spec = CATALOGUE_KINDS[kind];
       const { retired, ...changes } = parseRequest(patchSchemaOf(spec), body);
-      const existing = await catalogueRepository.findById(db, spec, id);
-      if (!existing) throw new AppError('ingredient-not-found', 'No catalogue entry has this id.', 404);
-      const { id: _id, retired: _retired, ...current } = existing;
+      const { id: _id, ingredientId: _identity, retired: _retired, ...current } = await existing(kind, id);
       const merged = parseRequest(spec.schema, { ...current, ...changes });
       const audited: Record<string, unknown> = Object.fromEntries(Object.keys(changes).map((field) => [field, merged[field]]));
       if (retired !== undefined) audited.retired = retired;
-      try {
-        await transactionWithRetry(db, async (trx) => {
+      await checkedWrite(() =>
+        transactionWithRetry(db, async (trx) => {
           await catalogueRepository.update(trx, spec, id, merged, retired);
           await recordAudit(trx, { actorUserId: actorId, action: 'ingredient-changed', subjectType: spec.table, subjectId: id, detail: audited });
-        });
-      } catch (error) {
-        if (isDuplicate(error)) throw nameTaken();
-        throw error;
-      }
-      return (await catalogueRepository.findById(db, spec, id))!;
+        }),
+      );
+      return existing(kind, id);
     },
 
-    /** Previews a CSV; with `commit` and no problems, adds every row in one transaction. */
-    async importCsv(actorId: number, kind: IngredientKind, csv: string, commit: boolean): Promise<CatalogueImportResult> {
+    /** The recipes and versions that use an entry, as far as the caller may see them. */
+    async usedIn(user: SessionUser, kind: IngredientKind, id: number): Promise<IngredientUsage> {
+      const entry = await existing(kind, id);
+      return ingredientUsage(db, user, entry.ingredientId as number);
+    },
+
+    /**
+     * Previews a CSV; a commit with no problems and a choice for every existing name adds the new
+     * rows and updates or skips the others, all in one transaction.
+     */
+    async importCsv(actorId: number, kind: IngredientKind, csv: string, commit: boolean, choiceList: { line: number; choice: ImportChoice }[] = []): Promise<CatalogueImportResult> {
       const spec = CATALOGUE_KINDS[kind];
-      const parsed = parseCatalogueCsv(spec, csv);
-      const taken = await catalogueRepository.existingNames(db, spec, parsed.rows.map((r) => String(r.entry.name)));
-      const problems = [
-        ...parsed.problems,
-        ...parsed.rows.filter((r) => taken.has(String(r.entry.name).toLowerCase())).map((r) => ({ line: r.line, reason: `"${r.entry.name}" is already in the catalogue` })),
-      ].sort((a, b) => a.line - b.line);
-      const result: CatalogueImportResult = { kind, rows: parsed.rows.map((r) => r.entry as CatalogueImportResult['rows'][number]), problems, imported: 0 };
-      if (!commit || problems.length > 0 || parsed.rows.length === 0) return result;
-      await db.transaction(async (trx) => {
-        for (const row of parsed.rows) await insertChecked(trx, kind, row.entry);
-        await recordAudit(trx, { actorUserId: actorId, action: 'ingredients-imported', subjectType: spec.table, subjectId: null, detail: { count: parsed.rows.length } });
-      });
-      return { ...result, imported: parsed.rows.length };
+      const checked = await checkImport(db, kind, csv);
+      if (!commit || checked.problems.length > 0 || checked.rows.length === 0) return importResult(kind, checked);
+      const choices = new Map(choiceList.map((each) => [each.line, each.choice]));
+      const undecided = checked.existing.filter((each) => !choices.has(each.line));
+      if (undecided.length) {
+        const problems = undecided.map((each) => ({ line: each.line, reason: `"${each.name}" is already in the catalogue as "${each.existingName}": choose skip or update` }));
+        return importResult(kind, { ...checked, problems });
+      }
+      const existingByLine = new Map(checked.existing.map((each) => [each.line, each]));
+      const counts = { imported: 0, updated: 0, skipped: 0 };
+      await checkedWrite(() =>
+        transactionWithRetry(db, async (trx) => {
+          for (const row of checked.rows) {
+            const match = existingByLine.get(row.line);
+            if (!match) {
+              await catalogueRepository.insert(trx, spec, row.entry);
+              counts.imported += 1;
+            } else if (choices.get(row.line) === 'update') {
+              await catalogueRepository.update(trx, spec, match.existingId, { ...row.entry, name: match.existingName });
+              counts.updated += 1;
+            } else counts.skipped += 1;
+          }
+          await recordAudit(trx, { actorUserId: actorId, action: 'ingredients-imported', subjectType: spec.table, subjectId: null, detail: { ...counts } });
+        }),
+      );
+      return importResult(kind, checked, counts);
     },
   };
 }

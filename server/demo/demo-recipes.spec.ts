@@ -6,11 +6,11 @@ import { DEMO_RECIPES, DemoRecipe } from '../../seeds/04_demo_recipes';
 // The seeds' catalogue with ids by position, as the database would number a fresh install.
 const catalogue: IngredientCatalogue = {
   fermentables: FERMENTABLES.map(([name, kind, extractPercent, colourLovibond, maxSharePercent], index) => ({
-    id: index + 1, name, kind, extractPercent, colourLovibond, maxSharePercent, retired: false,
+    id: index + 1, ingredientId: 100 + index, name, kind, extractPercent, colourLovibond, maxSharePercent, retired: false,
   })),
-  hops: HOPS.map(([name, alphaAcidPercent, form], index) => ({ id: index + 1, name, alphaAcidPercent, form, retired: false })),
+  hops: HOPS.map(([name, alphaAcidPercent, form], index) => ({ id: index + 1, ingredientId: 200 + index, name, alphaAcidPercent, form, retired: false })),
   yeasts: YEASTS.map(([name, attenuationMinPercent, attenuationMaxPercent, temperatureMinC, temperatureMaxC, flocculation], index) => ({
-    id: index + 1, name, attenuationMinPercent, attenuationMaxPercent, temperatureMinC, temperatureMaxC, flocculation, retired: false,
+    id: index + 1, ingredientId: 300 + index, name, attenuationMinPercent, attenuationMaxPercent, temperatureMinC, temperatureMaxC, flocculation, retired: false,
   })),
   others: [],
 };

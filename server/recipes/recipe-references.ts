@@ -3,6 +3,7 @@ import { RecipeDesign } from '@shared/recipes';
 import { CATALOGUE_KINDS } from '../catalogue/catalogue-kinds';
 import { catalogueRepository } from '../catalogue/catalogue.repository';
 import { AppError } from '../errors/app-error';
+import { stylesRepository } from '../styles/styles.repository';
 
 /** Throws a 400 naming each design field that points at no catalogue entry or style. */
 export async function assertReferencesExist(db: Knex, design: RecipeDesign): Promise<void> {
@@ -15,7 +16,7 @@ export async function assertReferencesExist(db: Knex, design: RecipeDesign): Pro
   await check('hops', design.hops.map((h, i) => ({ path: `design.hops.${i}.hopId`, id: h.hopId })));
   await check('others', design.others.map((o, i) => ({ path: `design.others.${i}.otherId`, id: o.otherId })));
   if (design.yeastId !== null) await check('yeasts', [{ path: 'design.yeastId', id: design.yeastId }]);
-  if (design.styleId !== null && !(await db('style_targets').where({ id: design.styleId }).first('id'))) {
+  if (design.styleId !== null && !(await stylesRepository.findById(db, design.styleId))) {
     fields['design.styleId'] = `is not in the style list (id ${design.styleId})`;
   }
   if (Object.keys(fields).length) {

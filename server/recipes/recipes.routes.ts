@@ -2,12 +2,10 @@ import { Router } from 'express';
 import { signedIn } from '../auth/route-access';
 import { parseId, parseRequest } from '../http/parse-request';
 import { recipeDesignSchema, cloneRecipeSchema, createRecipeSchema, saveRecipeSchema, updateRecipeSchema } from './recipes.schemas';
-import { fromRecipeFile, toRecipeFile } from './recipe-file';
 import { RecipesService } from './recipes.service';
-import { Knex } from 'knex';
 
 /** /api/recipes: every signed-in person; ownership and visibility are the service's rules. */
-export function createRecipesRouter(recipes: RecipesService, db: Knex): Router {
+export function createRecipesRouter(recipes: RecipesService): Router {
   const router = Router();
   const recipeId = (params: Record<string, unknown>) => parseId(params.recipeId, 'recipeId');
 
@@ -21,8 +19,7 @@ export function createRecipesRouter(recipes: RecipesService, db: Knex): Router {
   });
 
   router.post('/import', signedIn, async (req, res) => {
-    const design = parseRequest(recipeDesignSchema, await fromRecipeFile(db, req.body));
-    res.status(201).json(await recipes.create(req.user!, design, 'private'));
+    res.status(201).json(await recipes.importFile(req.user!, req.body, (design) => parseRequest(recipeDesignSchema, design)));
   });
 
   router.get('/:recipeId', signedIn, async (req, res) => {
@@ -32,6 +29,10 @@ export function createRecipesRouter(recipes: RecipesService, db: Knex): Router {
   router.put('/:recipeId', signedIn, async (req, res) => {
     const { design } = parseRequest(saveRecipeSchema, req.body);
     res.json(await recipes.save(req.user!, recipeId(req.params), design));
+  });
+
+  router.post('/:recipeId/catalogue-update', signedIn, async (req, res) => {
+    res.json(await recipes.updateToCatalogue(req.user!, recipeId(req.params)));
   });
 
   router.patch('/:recipeId', signedIn, async (req, res) => {
@@ -53,9 +54,9 @@ export function createRecipesRouter(recipes: RecipesService, db: Knex): Router {
   });
 
   router.get('/:recipeId/export', signedIn, async (req, res) => {
-    const recipe = await recipes.visible(req.user!, recipeId(req.params));
-    const fileName = recipe.name.replace(/[^A-Za-z0-9 _-]/g, '').trim().replace(/\s+/g, '-') || 'recipe';
-    res.set('Content-Disposition', `attachment; filename="${fileName}.json"`).json(await toRecipeFile(db, recipe.design));
+    const { name, file } = await recipes.exportFile(req.user!, recipeId(req.params));
+    const fileName = name.replace(/[^A-Za-z0-9 _-]/g, '').trim().replace(/\s+/g, '-') || 'recipe';
+    res.set('Content-Disposition', `attachment; filename="${fileName}.json"`).json(file);
   });
 
   return router;

@@ -1,49 +1,57 @@
 import { z } from 'zod';
-import { HOP_USES, hopTimeProblem, MAX_HOP_TIME, RECIPE_VISIBILITIES } from '@shared/recipes';
+import { HOP_USES, hopTimeProblem, NAME_MAX_LENGTH, NumberLimit, OTHER_UNITS, RECIPE_LIMITS, RECIPE_VISIBILITIES } from '@shared/recipes';
 
-const positive = (max: number, unit: string) =>
-  z.number('must be a number').positive('must be more than 0').max(max, `must be at most ${max} ${unit}`);
-const within = (min: number, max: number, unit: string) =>
+const within = ({ min, max, unit }: NumberLimit) =>
   z.number('must be a number').min(min, `must be at least ${min} ${unit}`).max(max, `must be at most ${max} ${unit}`);
+const text = (max: number) => z.string('must be text').trim().max(max, `must be at most ${max} characters`);
 const id = z.number('must be an id').int('must be a whole number').positive('must be an id');
+const L = RECIPE_LIMITS;
 
 export const recipeDesignSchema = z
   .object({
-    name: z.string('must be text').trim().min(1, 'must not be empty').max(100, 'must be at most 100 characters'),
+    name: text(NAME_MAX_LENGTH).min(1, 'must not be empty'),
     styleId: id.nullable(),
-    batchVolumeLitres: positive(2000, 'L'),
-    mashEfficiencyPercent: within(20, 100, '%'),
-    boilMinutes: within(0, 300, 'min'),
-    fermentables: z.array(z.object({ fermentableId: id, amountKg: positive(1000, 'kg') }).strict()).max(30, 'at most 30 fermentables'),
+    batchVolumeLitres: within(L.batchVolumeLitres),
+    mashEfficiencyPercent: within(L.mashEfficiencyPercent),
+    boilMinutes: within(L.boilMinutes),
+    fermentables: z.array(z.object({ fermentableId: id, amountKg: within(L.fermentableAmountKg) }).strict()).max(L.fermentables, `at most ${L.fermentables} fermentables`),
     hops: z
       .array(
         z
           .object({
             hopId: id,
-            amountGrams: positive(10000, 'g'),
-            time: within(0, MAX_HOP_TIME, '(min, or days for dry hop)'),
+            amountGrams: within(L.hopAmountGrams),
+            time: within(L.hopTime),
             use: z.enum(HOP_USES, `must be one of ${HOP_USES.join(', ')}`),
           })
           .strict(),
       )
-      .max(40, 'at most 40 hop additions'),
+      .max(L.hops, `at most ${L.hops} hop additions`),
     yeastId: id.nullable(),
     others: z
       .array(
         z
           .object({
             otherId: id,
-            amount: positive(100000, 'units'),
-            unit: z.string('must be text').trim().min(1, 'must not be empty').max(20),
-            when: z.string('must be text').trim().max(60),
+            amount: within(L.otherAmount),
+            unit: z.enum(OTHER_UNITS, `must be one of ${OTHER_UNITS.join(', ')}`),
+            when: text(L.otherWhenLength),
           })
           .strict(),
       )
-      .max(30, 'at most 30 other additions'),
+      .max(L.others, `at most ${L.others} other additions`),
     mashSteps: z
-      .array(z.object({ name: z.string('must be text').trim().min(1, 'must not be empty').max(60), temperatureC: within(20, 100, '°C'), minutes: within(0, 300, 'min') }).strict())
-      .max(10, 'at most 10 mash steps'),
-    notes: z.string('must be text').max(5000, 'must be at most 5000 characters'),
+      .array(
+        z
+          .object({
+            name: text(L.mashStepNameLength).min(1, 'must not be empty'),
+            temperatureC: within(L.mashTemperatureC),
+            minutes: within(L.mashMinutes),
+          })
+          .strict(),
+      )
+      .max(L.mashSteps, `at most ${L.mashSteps} mash steps`),
+    notes: z.string('must be text').max(L.notesLength, `must be at most ${L.notesLength} characters`),
   })
   .strict()
   .superRefine((design, context) => {
@@ -59,4 +67,4 @@ export const updateRecipeSchema = z
   .object({ visibility: z.enum(RECIPE_VISIBILITIES, 'must be private or coop').optional(), archived: z.boolean('must be true or false').optional() })
   .strict()
   .refine((b) => b.visibility !== undefined || b.archived !== undefined, { message: 'give visibility or archived', path: ['visibility'] });
-export const cloneRecipeSchema = z.object({ name: z.string('must be text').trim().min(1).max(100).optional() });
+export const cloneRecipeSchema = z.object({ name: text(NAME_MAX_LENGTH).min(1).optional() });

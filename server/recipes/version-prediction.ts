@@ -1,18 +1,15 @@
-import { Knex } from 'knex';
 import { BatchPrediction } from '@shared/batches';
-import { predictRecipe, RecipeDesign } from '@shared/recipes';
-import { brewhouseRepository } from '../brewhouse/brewhouse.repository';
-import { createCatalogueService } from '../catalogue/catalogue.service';
+import { predictRecipe, RecipeVersion } from '@shared/recipes';
 
 /**
  * What a saved version predicts, in the figures a batch keeps: OG, FG, ABV, pre-boil volume and
- * gravity, batch volume and the yeast's expected attenuation. The one place a batch gets its
- * predictions from, so when versions carry their own catalogue snapshot only this function changes.
+ * gravity, batch volume and the yeast's expected attenuation. Read from the version's own snapshot
+ * (ingredient values and brewhouse as saved), so no later catalogue edit changes a batch's plan.
  */
-export async function predictVersion(db: Knex, design: RecipeDesign): Promise<BatchPrediction> {
-  const [catalogue, brewhouse] = await Promise.all([createCatalogueService(db).list(true), brewhouseRepository.load(db)]);
-  const prediction = predictRecipe(design, catalogue, brewhouse);
-  const yeast = catalogue.yeasts.find((y) => y.id === design.yeastId);
+export function predictVersion(version: Pick<RecipeVersion, 'design' | 'ingredients' | 'brewhouse'>): BatchPrediction {
+  const { design, ingredients, brewhouse } = version;
+  const prediction = predictRecipe(design, ingredients, brewhouse);
+  const yeast = ingredients.yeasts.find((y) => y.id === design.yeastId);
   return {
     og: prediction.og,
     fg: prediction.fg,

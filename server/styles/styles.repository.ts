@@ -27,6 +27,12 @@ export const stylesRepository = {
     return row ? toStyle(row) : null;
   },
 
+  /** The style whose name the database holds equal to `name` (case and accents ignored). */
+  async findByName(db: Knex, name: string): Promise<StyleTarget | null> {
+    const row = await db('style_targets').where({ name }).first();
+    return row ? toStyle(row) : null;
+  },
+
   async insert(db: Knex, input: StyleTargetInput): Promise<number> {
     const [id] = await db('style_targets').insert(toRow(input));
     return id;

@@ -1,21 +1,21 @@
 import { Router } from 'express';
 import { z } from 'zod';
+import { NAME_MAX_LENGTH, NumberLimit, STYLE_TARGET_LIMITS } from '@shared/recipes';
 import { requireRole, signedIn } from '../auth/route-access';
 import { parseId, parseRequest } from '../http/parse-request';
 import { StylesService } from './styles.service';
 
-const range = (min: number, max: number) =>
-  z
-    .object({ min: z.number('must be a number').min(min).max(max), max: z.number('must be a number').min(min).max(max) })
-    .refine((r) => r.min <= r.max, { message: 'min must not exceed max', path: ['max'] });
+const bound = ({ min, max }: NumberLimit) => z.number('must be a number').min(min, `must be at least ${min}`).max(max, `must be at most ${max}`);
+const range = (limit: NumberLimit) =>
+  z.object({ min: bound(limit), max: bound(limit) }).refine((r) => r.min <= r.max, { message: 'min must not exceed max', path: ['max'] });
 
 const styleSchema = z.object({
-  name: z.string('must be text').trim().min(1, 'must not be empty').max(100),
-  og: range(1, 1.2),
-  fg: range(0.98, 1.1),
-  abv: range(0, 20),
-  ibu: range(0, 150),
-  colourSrm: range(0, 80),
+  name: z.string('must be text').trim().min(1, 'must not be empty').max(NAME_MAX_LENGTH, `must be at most ${NAME_MAX_LENGTH} characters`),
+  og: range(STYLE_TARGET_LIMITS.og),
+  fg: range(STYLE_TARGET_LIMITS.fg),
+  abv: range(STYLE_TARGET_LIMITS.abv),
+  ibu: range(STYLE_TARGET_LIMITS.ibu),
+  colourSrm: range(STYLE_TARGET_LIMITS.colourSrm),
 });
 
 /** /api/styles: read by everyone, kept by brewers and admins. */

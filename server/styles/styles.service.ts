@@ -19,15 +19,24 @@ export function createStylesService(db: Knex) {
     list: () => stylesRepository.list(db),
 
     async create(actorId: number, input: StyleTargetInput): Promise<StyleTarget> {
-      const id = await uniqueName(() => stylesRepository.insert(db, input));
-      await recordAudit(db, { actorUserId: actorId, action: 'style-added', subjectType: 'style_target', subjectId: id });
+      const id = await uniqueName(() =>
+        db.transaction(async (trx) => {
+          const newId = await stylesRepository.insert(trx, input);
+          await recordAudit(trx, { actorUserId: actorId, action: 'style-added', subjectType: 'style_target', subjectId: newId });
+          return newId;
+        }),
+      );
       return (await stylesRepository.findById(db, id))!;
     },
 
     async update(actorId: number, id: number, input: StyleTargetInput): Promise<StyleTarget> {
       if (!(await stylesRepository.findById(db, id))) throw new AppError('style-not-found', 'No style has this id.', 404);
-      await uniqueName(() => stylesRepository.update(db, id, input));
-      await recordAudit(db, { actorUserId: actorId, action: 'style-changed', subjectType: 'style_target', subjectId: id });
+      await uniqueName(() =>
+        db.transaction(async (trx) => {
+          await stylesRepository.update(trx, id, input);
+          await recordAudit(trx, { actorUserId: actorId, action: 'style-changed', subjectType: 'style_target', subjectId: id });
+        }),
+      );
       return (await stylesRepository.findById(db, id))!;
     },
   };

@@ -12,3 +12,6 @@ export * from './scale-recipe';
 export * from './recipe-test-data';
 export * from './catalogue-csv-columns';
 export * from './hop-timing';
+export * from './recipe-snapshot';
+export * from './recipe-limits';
+export * from './other-units';

@@ -16,6 +16,8 @@ export type IngredientKind = (typeof INGREDIENT_KINDS)[number];
 
 export interface Fermentable {
   id: number;
+  /** The identity shared by every kind of ingredient (stock and shopping lists refer to it). */
+  ingredientId: number;
   name: string;
   kind: FermentableKind;
   /** Extract yield, % of the ingredient's mass as used (e.g. 80 for a typical pale malt, 100 for sugar). */
@@ -29,6 +31,8 @@ export interface Fermentable {
 
 export interface Hop {
   id: number;
+  /** The identity shared by every kind of ingredient (stock and shopping lists refer to it). */
+  ingredientId: number;
   name: string;
   alphaAcidPercent: number;
   form: HopForm;
@@ -37,6 +41,8 @@ export interface Hop {
 
 export interface Yeast {
   id: number;
+  /** The identity shared by every kind of ingredient (stock and shopping lists refer to it). */
+  ingredientId: number;
   name: string;
   attenuationMinPercent: number;
   attenuationMaxPercent: number;
@@ -48,6 +54,8 @@ export interface Yeast {
 
 export interface OtherAddition {
   id: number;
+  /** The identity shared by every kind of ingredient (stock and shopping lists refer to it). */
+  ingredientId: number;
   name: string;
   kind: OtherAdditionKind;
   retired: boolean;
@@ -62,7 +70,28 @@ export interface IngredientCatalogue {
 }
 
 /** New or changed entries: everything but id; `retired` is changed with PATCH only. */
-export type FermentableInput = Omit<Fermentable, 'id' | 'retired'>;
-export type HopInput = Omit<Hop, 'id' | 'retired'>;
-export type YeastInput = Omit<Yeast, 'id' | 'retired'>;
-export type OtherAdditionInput = Omit<OtherAddition, 'id' | 'retired'>;
+export type FermentableInput = Omit<Fermentable, 'id' | 'ingredientId' | 'retired'>;
+export type HopInput = Omit<Hop, 'id' | 'ingredientId' | 'retired'>;
+export type YeastInput = Omit<Yeast, 'id' | 'ingredientId' | 'retired'>;
+export type OtherAdditionInput = Omit<OtherAddition, 'id' | 'ingredientId' | 'retired'>;
+
+/** Where one catalogue entry is used: a recipe and which of its versions contain it. */
+export interface IngredientUse {
+  recipeId: number;
+  recipeName: string;
+  ownerName: string;
+  currentVersion: number;
+  /** Versions containing the entry, newest first. */
+  versions: number[];
+  /** True when the recipe's current version contains it and the recipe is not archived. */
+  inCurrentRecipe: boolean;
+}
+
+/** GET /api/ingredients/:kind/:ingredientId/used-in. */
+export interface IngredientUsage {
+  uses: IngredientUse[];
+  /** Private recipes of other members that use the entry; counted, not named. */
+  hiddenRecipeCount: number;
+  /** How many of those use it in their current version. */
+  hiddenCurrentRecipeCount: number;
+}

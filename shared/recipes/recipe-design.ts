@@ -1,4 +1,11 @@
 /** What a member designs; each save stores one of these as a new version. SI units throughout. */
+
+/**
+ * The shape of a stored design. 1: other additions had free-text units; 2: units from OTHER_UNITS.
+ * A version records the format it was saved in.
+ */
+export const RECIPE_DESIGN_FORMAT = 2;
+
 export const HOP_USES = ['first wort', 'boil', 'whirlpool', 'dry hop'] as const;
 export type HopUse = (typeof HOP_USES)[number];
 
@@ -15,11 +22,14 @@ export interface HopItem {
   use: HopUse;
 }
 
+/** Units an other addition is measured in; "each" counts pieces (tablets, sticks, pods). */
+export const OTHER_UNITS = ['g', 'kg', 'mL', 'L', 'each'] as const;
+export type OtherUnit = (typeof OTHER_UNITS)[number];
+
 export interface OtherItem {
   otherId: number;
   amount: number;
-  /** Free unit text such as "g", "tablet", "mL". */
-  unit: string;
+  unit: OtherUnit;
   /** When it goes in, e.g. "boil 10 min", "mash", "bottling". */
   when: string;
 }

@@ -6,19 +6,19 @@ import { RecipeDesign } from './recipe-design';
 export function generateMockCatalogue(): IngredientCatalogue {
   return {
     fermentables: [
-      { id: 1, name: 'Pale base malt', kind: 'grain', extractPercent: 80, colourLovibond: 3, maxSharePercent: 100, retired: false },
-      { id: 2, name: 'Medium crystal malt', kind: 'grain', extractPercent: 74, colourLovibond: 60, maxSharePercent: 15, retired: false },
-      { id: 3, name: 'Cane sugar', kind: 'sugar', extractPercent: 100, colourLovibond: 0, maxSharePercent: 20, retired: false },
-      { id: 4, name: 'Old roasted barley', kind: 'grain', extractPercent: 55, colourLovibond: 500, maxSharePercent: 10, retired: true },
+      { id: 1, ingredientId: 101, name: 'Pale base malt', kind: 'grain', extractPercent: 80, colourLovibond: 3, maxSharePercent: 100, retired: false },
+      { id: 2, ingredientId: 102, name: 'Medium crystal malt', kind: 'grain', extractPercent: 74, colourLovibond: 60, maxSharePercent: 15, retired: false },
+      { id: 3, ingredientId: 103, name: 'Cane sugar', kind: 'sugar', extractPercent: 100, colourLovibond: 0, maxSharePercent: 20, retired: false },
+      { id: 4, ingredientId: 104, name: 'Old roasted barley', kind: 'grain', extractPercent: 55, colourLovibond: 500, maxSharePercent: 10, retired: true },
     ],
     hops: [
-      { id: 11, name: 'Bittering pellet hop', alphaAcidPercent: 12, form: 'pellet', retired: false },
-      { id: 12, name: 'Aroma whole hop', alphaAcidPercent: 4.5, form: 'whole', retired: false },
+      { id: 11, ingredientId: 111, name: 'Bittering pellet hop', alphaAcidPercent: 12, form: 'pellet', retired: false },
+      { id: 12, ingredientId: 112, name: 'Aroma whole hop', alphaAcidPercent: 4.5, form: 'whole', retired: false },
     ],
     yeasts: [
-      { id: 21, name: 'Clean ale yeast', attenuationMinPercent: 73, attenuationMaxPercent: 77, temperatureMinC: 16, temperatureMaxC: 22, flocculation: 'medium', retired: false },
+      { id: 21, ingredientId: 121, name: 'Clean ale yeast', attenuationMinPercent: 73, attenuationMaxPercent: 77, temperatureMinC: 16, temperatureMaxC: 22, flocculation: 'medium', retired: false },
     ],
-    others: [{ id: 31, name: 'Kettle fining tablet', kind: 'fining', retired: false }],
+    others: [{ id: 31, ingredientId: 131, name: 'Kettle fining tablet', kind: 'fining', retired: false }],
   };
 }
 
@@ -40,7 +40,7 @@ export function generateMockDesign(overrides: Partial<RecipeDesign> = {}): Recip
       { hopId: 12, amountGrams: 40, time: 3, use: 'dry hop' },
     ],
     yeastId: 21,
-    others: [{ otherId: 31, amount: 1, unit: 'tablet', when: 'boil 10 min' }],
+    others: [{ otherId: 31, amount: 1, unit: 'each', when: 'boil 10 min' }],
     mashSteps: [{ name: 'Saccharification rest', temperatureC: 66, minutes: 60 }],
     notes: '',
     ...overrides,

@@ -1,3 +1,5 @@
+import { BrewhouseSettings } from './brewhouse-settings';
+import { IngredientCatalogue } from './ingredient';
 import { RecipeDesign } from './recipe-design';
 
 export const RECIPE_VISIBILITIES = ['private', 'coop'] as const;
@@ -18,8 +20,19 @@ export interface RecipeSummary {
   updatedAt: string;
 }
 
-/** A recipe with its current design. */
-export interface Recipe extends RecipeSummary {
+/**
+ * What a version was made with: the ingredient properties (only the entries its design uses) and the
+ * brewhouse settings at the time. Predictions of a saved version read these, never today's catalogue.
+ */
+export interface VersionSnapshot {
+  /** RECIPE_DESIGN_FORMAT when the version was saved. */
+  designFormat: number;
+  ingredients: IngredientCatalogue;
+  brewhouse: BrewhouseSettings;
+}
+
+/** A recipe with its current design and that version's snapshot. */
+export interface Recipe extends RecipeSummary, VersionSnapshot {
   design: RecipeDesign;
   /** True when the caller may change it (the owner). */
   editable: boolean;
@@ -32,6 +45,6 @@ export interface RecipeVersionSummary {
   createdBy: string;
 }
 
-export interface RecipeVersion extends RecipeVersionSummary {
+export interface RecipeVersion extends RecipeVersionSummary, VersionSnapshot {
   design: RecipeDesign;
 }

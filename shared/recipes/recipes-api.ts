@@ -1,5 +1,5 @@
 import { IngredientKind } from './ingredient';
-import { RecipeDesign } from './recipe-design';
+import { OtherUnit, RecipeDesign } from './recipe-design';
 import { RecipeVisibility } from './recipe';
 
 export const RECIPES_PATH = '/api/recipes';
@@ -49,10 +49,16 @@ export interface CloneRecipeRequest {
   name?: string;
 }
 
+/** What to do with a CSV row whose name the catalogue already has. */
+export const IMPORT_CHOICES = ['skip', 'update'] as const;
+export type ImportChoice = (typeof IMPORT_CHOICES)[number];
+
 /** CSV import of one kind of catalogue entry: with `commit: false` it only previews. */
 export interface CatalogueImportRequest {
   csv: string;
   commit: boolean;
+  /** The brewer's choice for each row (by line) whose name is already in the catalogue. */
+  choices?: { line: number; choice: ImportChoice }[];
 }
 
 export interface CatalogueImportProblem {
@@ -61,18 +67,33 @@ export interface CatalogueImportProblem {
   reason: string;
 }
 
+/** A valid row whose name the catalogue already holds (compared as the database compares names). */
+export interface CatalogueImportExisting {
+  line: number;
+  name: string;
+  existingId: number;
+  existingName: string;
+}
+
 export interface CatalogueImportResult {
   kind: IngredientKind;
   /** Rows understood, in file order. */
   rows: Record<string, string | number | null>[];
+  /** Rows that cannot be imported as they are: nothing is imported while there is one. */
   problems: CatalogueImportProblem[];
-  /** How many entries were added: 0 unless `commit` was true and there were no problems. */
+  /** Rows naming an existing entry: each needs a choice, skip or update, before the import. */
+  existing: CatalogueImportExisting[];
+  /** Entries added, changed and left alone: all 0 unless `commit` was true and nothing blocked it. */
   imported: number;
+  updated: number;
+  skipped: number;
 }
 
 /** Format name and version of the project's own recipe file; see docs/recipe-format.md. */
 export const RECIPE_EXPORT_FORMAT = 'commonwort-recipe';
-export const RECIPE_EXPORT_VERSION = 1;
+export const RECIPE_EXPORT_VERSION = 2;
+/** Versions a reader accepts: 1 had free-text units for other additions. */
+export const RECIPE_EXPORT_READABLE_VERSIONS = [1, 2] as const;
 
 /** A recipe file: ingredients are carried by name and properties so another co-op can import it. */
 export interface RecipeExport {
@@ -84,7 +105,7 @@ export interface RecipeExport {
     fermentables: { name: string; kind: string; extractPercent: number; colourLovibond: number; amountKg: number }[];
     hops: { name: string; alphaAcidPercent: number; form: string; amountGrams: number; time: number; use: string }[];
     yeast: { name: string; attenuationMinPercent: number; attenuationMaxPercent: number } | null;
-    others: { name: string; kind: string; amount: number; unit: string; when: string }[];
+    others: { name: string; kind: string; amount: number; unit: OtherUnit; when: string }[];
   };
 }
 

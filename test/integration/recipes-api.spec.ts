@@ -94,7 +94,7 @@ describe('Recipes API', () => {
     const id = (await client.send('post', '/api/recipes', { design: sampleDesign(ids), visibility: 'private' })).body.id;
     const file = await client.get(`/api/recipes/${id}/export`);
     expect(file.status).toBe(200);
-    expect(file.body).toMatchObject({ format: 'commonwort-recipe', formatVersion: 1 });
+    expect(file.body).toMatchObject({ format: 'commonwort-recipe', formatVersion: 2 });
     expect(file.body.design.fermentables[0].name).toContain('Test pale malt');
     const imported = await client.send('post', '/api/recipes/import', file.body);
     expect(imported.status).toBe(201);

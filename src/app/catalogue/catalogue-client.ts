@@ -7,6 +7,7 @@ import {
   CatalogueImportResult,
   IngredientCatalogue,
   IngredientKind,
+  IngredientUsage,
   INGREDIENTS_PATH,
   StyleTarget,
   StyleTargetInput,
@@ -34,6 +35,10 @@ export class CatalogueClient {
 
   importCsv(kind: IngredientKind, request: CatalogueImportRequest): Observable<CatalogueImportResult> {
     return this.http.post<CatalogueImportResult>(`${INGREDIENTS_PATH}/${kind}/import`, request);
+  }
+
+  usedIn(kind: IngredientKind, id: number): Observable<IngredientUsage> {
+    return this.http.get<IngredientUsage>(`${INGREDIENTS_PATH}/${kind}/${id}/used-in`);
   }
 
   styles(): Observable<StyleTarget[]> {

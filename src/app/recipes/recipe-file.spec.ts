@@ -6,9 +6,9 @@ describe('parseRecipeFile', () => {
   });
 
   it('refuses another format version', () => {
-    const result = parseRecipeFile(JSON.stringify({ format: 'commonwort-recipe', formatVersion: 2, design: { name: 'x' } }));
+    const result = parseRecipeFile(JSON.stringify({ format: 'commonwort-recipe', formatVersion: 3, design: { name: 'x' } }));
 
-    expect(result).toEqual({ ok: false, message: 'This recipe file has format version 2; version 1 can be read.' });
+    expect(result).toEqual({ ok: false, message: 'This recipe file has format version 3; versions 1 and 2 can be read.' });
   });
 
   it('accepts a file of this format', () => {

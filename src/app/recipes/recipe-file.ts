@@ -1,4 +1,4 @@
-import { RECIPE_EXPORT_FORMAT, RECIPE_EXPORT_VERSION, RecipeExport } from '@shared/recipes';
+import { RECIPE_EXPORT_FORMAT, RECIPE_EXPORT_READABLE_VERSIONS, RecipeExport } from '@shared/recipes';
 
 /** A recipe file read from disk: the file, or why it cannot be used. */
 export type ParsedRecipeFile = { ok: true; file: RecipeExport } | { ok: false; message: string };
@@ -15,8 +15,9 @@ export function parseRecipeFile(text: string): ParsedRecipeFile {
   if (!file || typeof file !== 'object' || file.format !== RECIPE_EXPORT_FORMAT) {
     return { ok: false, message: `This is not a recipe file of this app (its "format" is not "${RECIPE_EXPORT_FORMAT}").` };
   }
-  if (file.formatVersion !== RECIPE_EXPORT_VERSION) {
-    return { ok: false, message: `This recipe file has format version ${String(file.formatVersion)}; version ${RECIPE_EXPORT_VERSION} can be read.` };
+  if (!(RECIPE_EXPORT_READABLE_VERSIONS as readonly unknown[]).includes(file.formatVersion)) {
+    const readable = RECIPE_EXPORT_READABLE_VERSIONS.join(' and ');
+    return { ok: false, message: `This recipe file has format version ${String(file.formatVersion)}; versions ${readable} can be read.` };
   }
   if (!file.design || typeof file.design !== 'object' || typeof file.design.name !== 'string') {
     return { ok: false, message: 'This recipe file has no design with a name.' };

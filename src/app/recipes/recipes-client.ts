@@ -39,6 +39,11 @@ export class RecipesClient {
     return this.http.put<Recipe>(`${RECIPES_PATH}/${recipeId}`, request);
   }
 
+  /** A new version of the saved design with today's catalogue values and brewhouse. */
+  updateToCatalogue(recipeId: number): Observable<Recipe> {
+    return this.http.post<Recipe>(`${RECIPES_PATH}/${recipeId}/catalogue-update`, {});
+  }
+
   update(recipeId: number, request: UpdateRecipeRequest): Observable<Recipe> {
     return this.http.patch<Recipe>(`${RECIPES_PATH}/${recipeId}`, request);
   }

@@ -1,4 +1,4 @@
-import { generateMockDesign, Recipe, RecipeVersion } from '@shared/recipes';
+import { generateMockCatalogue, generateMockDesign, MOCK_BREWHOUSE, Recipe, RECIPE_DESIGN_FORMAT, RecipeVersion } from '@shared/recipes';
 
 /** A recipe as the API returns it, for specs; invented, as all test data. */
 export function generateMockRecipe(overrides: Partial<Recipe> = {}): Recipe {
@@ -17,11 +17,23 @@ export function generateMockRecipe(overrides: Partial<Recipe> = {}): Recipe {
     createdAt: '2026-11-30T18:00:00.000Z',
     editable: true,
     design,
+    designFormat: RECIPE_DESIGN_FORMAT,
+    ingredients: generateMockCatalogue(),
+    brewhouse: MOCK_BREWHOUSE,
     ...overrides,
   };
 }
 
 /** One stored version of a recipe, for specs. */
 export function generateMockVersion(version: number, overrides: Partial<RecipeVersion> = {}): RecipeVersion {
-  return { version, createdAt: '2026-11-30T18:00:00.000Z', createdBy: 'Priya Raman', design: generateMockDesign(), ...overrides };
+  return {
+    version,
+    createdAt: '2026-11-30T18:00:00.000Z',
+    createdBy: 'Priya Raman',
+    design: generateMockDesign(),
+    designFormat: RECIPE_DESIGN_FORMAT,
+    ingredients: generateMockCatalogue(),
+    brewhouse: MOCK_BREWHOUSE,
+    ...overrides,
+  };
 }

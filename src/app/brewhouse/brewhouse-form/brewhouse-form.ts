@@ -3,19 +3,20 @@ import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angula
 import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
-import { BrewhouseSettings, KETTLE_CAPACITY_MAX_LITRES } from '@shared/recipes';
+import { BREWHOUSE_LIMITS, BrewhouseSettings, KETTLE_CAPACITY_MAX_LITRES } from '@shared/recipes';
 
 type NumericKey = Exclude<keyof BrewhouseSettings, 'mashTunHeatCapacityKjPerK' | 'kettleCapacityLitres'>;
 
-/** The fields of the brewhouse settings, with the ranges the water plan accepts. */
+/** The fields of the brewhouse settings, with the shared limits the server checks too. */
 const FIELDS: { key: NumericKey; label: string; unit: string; min: number; max: number }[] = [
-  { key: 'boilOffLitresPerHour', label: 'Boil-off', unit: 'L/h', min: 0, max: 100 },
-  { key: 'grainAbsorptionLitresPerKg', label: 'Grain absorption', unit: 'L/kg', min: 0, max: 5 },
-  { key: 'kettleLossLitres', label: 'Kettle loss', unit: 'L', min: 0, max: 100 },
-  { key: 'fermenterLossLitres', label: 'Fermenter loss', unit: 'L', min: 0, max: 100 },
-  { key: 'mashThicknessLitresPerKg', label: 'Mash thickness', unit: 'L/kg', min: 1, max: 10 },
-  { key: 'grainTemperatureC', label: 'Grain temperature', unit: '°C', min: -10, max: 50 },
+  { key: 'boilOffLitresPerHour', label: 'Boil-off', ...BREWHOUSE_LIMITS.boilOffLitresPerHour },
+  { key: 'grainAbsorptionLitresPerKg', label: 'Grain absorption', ...BREWHOUSE_LIMITS.grainAbsorptionLitresPerKg },
+  { key: 'kettleLossLitres', label: 'Kettle loss', ...BREWHOUSE_LIMITS.kettleLossLitres },
+  { key: 'fermenterLossLitres', label: 'Fermenter loss', ...BREWHOUSE_LIMITS.fermenterLossLitres },
+  { key: 'mashThicknessLitresPerKg', label: 'Mash thickness', ...BREWHOUSE_LIMITS.mashThicknessLitresPerKg },
+  { key: 'grainTemperatureC', label: 'Grain temperature', ...BREWHOUSE_LIMITS.grainTemperatureC },
 ];
+const HEAT_CAPACITY = BREWHOUSE_LIMITS.mashTunHeatCapacityKjPerK;
 
 /** The co-op's brewhouse settings, from which every recipe's water plan follows (metric, as stored). */
 @Component({
@@ -37,7 +38,7 @@ export class BrewhouseForm {
     ...(Object.fromEntries(
       FIELDS.map((f) => [f.key, this.fb.control<number | null>(null, [Validators.required, Validators.min(f.min), Validators.max(f.max)])]),
     ) as Record<NumericKey, ReturnType<typeof this.fb.control<number | null>>>),
-    mashTunHeatCapacityKjPerK: this.fb.control<number | null>(null, [Validators.min(0), Validators.max(100)]),
+    mashTunHeatCapacityKjPerK: this.fb.control<number | null>(null, [Validators.min(HEAT_CAPACITY.min), Validators.max(HEAT_CAPACITY.max)]),
     kettleCapacityLitres: this.fb.control<number | null>(null, [Validators.min(0.1), Validators.max(KETTLE_CAPACITY_MAX_LITRES)]),
   });
   protected readonly maxKettle = KETTLE_CAPACITY_MAX_LITRES;

@@ -1,8 +1,11 @@
 import { AbstractControl, NonNullableFormBuilder, ValidationErrors, Validators } from '@angular/forms';
-import { FermentableKind, Flocculation, HopForm, IngredientKind, OtherAdditionKind } from '@shared/recipes';
+import { CATALOGUE_LIMITS, FermentableKind, Flocculation, HopForm, IngredientKind, NAME_MAX_LENGTH, NumberLimit, OtherAdditionKind } from '@shared/recipes';
 import { CatalogueEntryInput } from '../catalogue-entry';
 
-const percent = [Validators.required, Validators.min(0), Validators.max(100)];
+const within = ({ min, max }: NumberLimit) => [Validators.min(min), Validators.max(max)];
+const required = (limit: NumberLimit) => [Validators.required, ...within(limit)];
+const name = [Validators.required, Validators.maxLength(NAME_MAX_LENGTH)];
+const L = CATALOGUE_LIMITS;
 
 /** The lower end of a range must not be above the upper end. */
 function orderedRange(minKey: string, maxKey: string, error: string) {
@@ -17,24 +20,24 @@ function orderedRange(minKey: string, maxKey: string, error: string) {
 export function entryFormGroups(fb: NonNullableFormBuilder) {
   return {
     fermentables: fb.group({
-      name: fb.control('', [Validators.required, Validators.maxLength(100)]),
+      name: fb.control('', name),
       kind: fb.control<FermentableKind>('grain', Validators.required),
-      extractPercent: fb.control<number | null>(null, percent),
-      colourLovibond: fb.control<number | null>(null, [Validators.required, Validators.min(0), Validators.max(600)]),
-      maxSharePercent: fb.control<number | null>(null, [Validators.min(0), Validators.max(100)]),
+      extractPercent: fb.control<number | null>(null, required(L.extractPercent)),
+      colourLovibond: fb.control<number | null>(null, required(L.colourLovibond)),
+      maxSharePercent: fb.control<number | null>(null, within(L.maxSharePercent)),
     }),
     hops: fb.group({
-      name: fb.control('', [Validators.required, Validators.maxLength(100)]),
-      alphaAcidPercent: fb.control<number | null>(null, [Validators.required, Validators.min(0), Validators.max(100)]),
+      name: fb.control('', name),
+      alphaAcidPercent: fb.control<number | null>(null, required(L.alphaAcidPercent)),
       form: fb.control<HopForm>('pellet', Validators.required),
     }),
     yeasts: fb.group(
       {
-        name: fb.control('', [Validators.required, Validators.maxLength(100)]),
-        attenuationMinPercent: fb.control<number | null>(null, percent),
-        attenuationMaxPercent: fb.control<number | null>(null, percent),
-        temperatureMinC: fb.control<number | null>(null, [Validators.required, Validators.min(-5), Validators.max(50)]),
-        temperatureMaxC: fb.control<number | null>(null, [Validators.required, Validators.min(-5), Validators.max(50)]),
+        name: fb.control('', name),
+        attenuationMinPercent: fb.control<number | null>(null, required(L.attenuationPercent)),
+        attenuationMaxPercent: fb.control<number | null>(null, required(L.attenuationPercent)),
+        temperatureMinC: fb.control<number | null>(null, required(L.temperatureC)),
+        temperatureMaxC: fb.control<number | null>(null, required(L.temperatureC)),
         flocculation: fb.control<Flocculation>('medium', Validators.required),
       },
       {
@@ -45,7 +48,7 @@ export function entryFormGroups(fb: NonNullableFormBuilder) {
       },
     ),
     others: fb.group({
-      name: fb.control('', [Validators.required, Validators.maxLength(100)]),
+      name: fb.control('', name),
       kind: fb.control<OtherAdditionKind>('other', Validators.required),
     }),
   };

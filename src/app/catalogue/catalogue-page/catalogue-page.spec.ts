@@ -59,12 +59,13 @@ describe('CataloguePage', () => {
     expect([...element.querySelectorAll('button')].some((b) => b.textContent?.trim() === 'Retire')).toBe(false);
   });
 
-  it('lets a brewer retire an entry with one event', async () => {
+  it('asks where an entry is used before a brewer retires it', async () => {
     const { store, element } = await render(true);
 
     element.querySelector<HTMLButtonElement>('button[aria-label="Retire Pale base malt"]')!.click();
 
-    expect(store.dispatch).toHaveBeenCalledWith(CataloguePageActions.entryRetiredChanged({ kind: 'fermentables', id: 1, retired: true }));
+    expect(store.dispatch).toHaveBeenCalledWith(CataloguePageActions.usageRequested({ kind: 'fermentables', id: 1, name: 'Pale base malt', purpose: 'retire' }));
+    expect(store.dispatch).not.toHaveBeenCalledWith(expect.objectContaining({ type: CataloguePageActions.entryRetiredChanged.type }));
     expect(element.textContent).toContain('Import from a CSV file');
   });
 });

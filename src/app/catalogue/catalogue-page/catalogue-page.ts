@@ -7,13 +7,14 @@ import { MatInput } from '@angular/material/input';
 import { MatTab, MatTabGroup } from '@angular/material/tabs';
 import { RouterLink } from '@angular/router';
 import { Store } from '@ngrx/store';
-import { BrewhouseSettings, INGREDIENT_KINDS, IngredientKind, StyleTarget, StyleTargetInput } from '@shared/recipes';
+import { BrewhouseSettings, CATALOGUE_CSV_MAX_BYTES, CATALOGUE_CSV_MAX_TEXT, INGREDIENT_KINDS, IngredientKind, StyleTarget, StyleTargetInput } from '@shared/recipes';
 import { BrewhouseForm } from '@app/brewhouse/brewhouse-form/brewhouse-form';
 import { CATALOGUE_CSV_COLUMNS, KIND_LABELS } from '../catalogue-columns';
 import { CatalogueEntry, CatalogueEntryInput } from '../catalogue-entry';
 import { CatalogueEntryForm } from '../catalogue-entry-form/catalogue-entry-form';
 import { CatalogueTable, RetiredChange } from '../catalogue-table/catalogue-table';
-import { CsvImportPreview } from '../csv-import-preview/csv-import-preview';
+import { CsvImportPreview, ImportChoiceLine } from '../csv-import-preview/csv-import-preview';
+import { IngredientUsagePanel } from '../ingredient-usage-panel/ingredient-usage-panel';
 import { StyleForm } from '@app/styles/style-form/style-form';
 import { StyleTable } from '@app/styles/style-table/style-table';
 import { CataloguePageActions } from '../state/catalogue-page.actions';
@@ -22,7 +23,7 @@ import { selectBrewhouseOrDefault, selectCataloguePageViewModel } from '../state
 /** The co-op's ingredient catalogue by kind, its style list and brewhouse settings. */
 @Component({
   selector: 'cw-catalogue-page',
-  imports: [CatalogueTable, CatalogueEntryForm, CsvImportPreview, StyleTable, StyleForm, BrewhouseForm, RouterLink,
+  imports: [CatalogueTable, CatalogueEntryForm, CsvImportPreview, IngredientUsagePanel, StyleTable, StyleForm, BrewhouseForm, RouterLink,
     MatTabGroup, MatTab, MatButton, MatIcon, MatCheckbox, MatFormField, MatLabel, MatInput],
   templateUrl: './catalogue-page.html',
   styleUrl: './catalogue-page.scss',
@@ -38,6 +39,9 @@ export class CataloguePage implements OnInit {
   protected readonly csvColumns = CATALOGUE_CSV_COLUMNS;
   protected readonly editing = signal<CatalogueEntry | null>(null);
   protected readonly editingStyle = signal<StyleTarget | null>(null);
+  protected readonly csvLimit = CATALOGUE_CSV_MAX_TEXT;
+  /** A file refused before upload, by kind. */
+  protected readonly fileError = signal<{ kind: IngredientKind; message: string } | null>(null);
 
   ngOnInit(): void {
     this.store.dispatch(CataloguePageActions.opened());
@@ -64,14 +68,26 @@ export class CataloguePage implements OnInit {
   protected async previewFile(kind: IngredientKind, input: HTMLInputElement): Promise<void> {
     const file = input.files?.[0];
     if (!file) return;
-    const csv = await file.text();
     input.value = '';
-    this.store.dispatch(CataloguePageActions.importPreviewRequested({ kind, csv }));
+    if (file.size > CATALOGUE_CSV_MAX_BYTES) {
+      this.fileError.set({ kind, message: `${file.name} is larger than ${CATALOGUE_CSV_MAX_TEXT}; split it into smaller files.` });
+      return;
+    }
+    this.fileError.set(null);
+    this.store.dispatch(CataloguePageActions.importPreviewRequested({ kind, csv: await file.text() }));
   }
 
-  protected confirmImport(): void {
+  protected confirmImport(choices: ImportChoiceLine[]): void {
     const preview = this.vm().importPreview;
-    if (preview) this.store.dispatch(CataloguePageActions.importConfirmed({ kind: preview.kind, csv: preview.csv }));
+    if (preview) this.store.dispatch(CataloguePageActions.importConfirmed({ kind: preview.kind, csv: preview.csv, choices }));
+  }
+
+  protected showUsage(kind: IngredientKind, request: { entry: CatalogueEntry; purpose: 'view' | 'retire' }): void {
+    this.store.dispatch(CataloguePageActions.usageRequested({ kind, id: request.entry.id, name: request.entry.name, purpose: request.purpose }));
+  }
+
+  protected dismissUsage(): void {
+    this.store.dispatch(CataloguePageActions.usageDismissed());
   }
 
   protected dismissImport(): void {

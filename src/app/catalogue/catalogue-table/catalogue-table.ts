@@ -11,7 +11,7 @@ export interface RetiredChange {
   retired: boolean;
 }
 
-/** The entries of one kind with their properties; brewers and admins edit and retire them here. */
+/** The entries of one kind with their properties and where they are used; brewers and admins edit and retire them here. */
 @Component({
   selector: 'cw-catalogue-table',
   imports: [MatButton],
@@ -26,6 +26,8 @@ export class CatalogueTable {
   readonly saving = input(false);
   readonly editRequested = output<CatalogueEntry>();
   readonly retiredChanged = output<RetiredChange>();
+  /** Asks where an entry is used; `retire` asks before retiring it. */
+  readonly usageRequested = output<{ entry: CatalogueEntry; purpose: 'view' | 'retire' }>();
 
   protected readonly label = computed(() => KIND_LABELS[this.kind()]);
   protected readonly columns = computed(() => COLUMNS[this.kind()]);

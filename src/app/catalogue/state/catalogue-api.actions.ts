@@ -1,5 +1,5 @@
 import { createActionGroup, props } from '@ngrx/store';
-import { BrewhouseSettings, CatalogueImportResult, IngredientCatalogue, IngredientKind, StyleTarget } from '@shared/recipes';
+import { BrewhouseSettings, CatalogueImportResult, IngredientCatalogue, IngredientKind, IngredientUsage, StyleTarget } from '@shared/recipes';
 import { CatalogueEntry } from '../catalogue-entry';
 
 export const CatalogueApiActions = createActionGroup({
@@ -17,6 +17,8 @@ export const CatalogueApiActions = createActionGroup({
     'Import Previewed Failure': props<{ message: string }>(),
     'Import Committed Success': props<{ result: CatalogueImportResult }>(),
     'Import Committed Failure': props<{ message: string }>(),
+    'Usage Loaded Success': props<{ id: number; usage: IngredientUsage }>(),
+    'Usage Loaded Failure': props<{ id: number; message: string }>(),
     'Style Saved Success': props<{ style: StyleTarget }>(),
     'Style Saved Failure': props<{ message: string }>(),
     'Brewhouse Saved Success': props<{ settings: BrewhouseSettings }>(),

@@ -19,9 +19,9 @@ export const showCatalogueSuccess = createEffect(
           case CatalogueApiActions.brewhouseSavedSuccess.type:
             return 'Saved the brewhouse settings.';
           default:
-            return action.result.imported > 0
-              ? `Imported ${action.result.imported} entries.`
-              : `Nothing imported: ${action.result.problems.length} rows need fixing.`;
+            return action.result.problems.length === 0
+              ? `Added ${action.result.imported}, updated ${action.result.updated}, skipped ${action.result.skipped} entries.`
+              : `Nothing imported: ${action.result.problems.length} rows need attention.`;
         }
       }),
       tap((message) => snackBar.open(message, 'Dismiss', { duration: SNACK_DURATION_MS })),
@@ -39,6 +39,7 @@ export const showCatalogueFailure = createEffect(
         CatalogueApiActions.entrySavedFailure,
         CatalogueApiActions.importPreviewedFailure,
         CatalogueApiActions.importCommittedFailure,
+        CatalogueApiActions.usageLoadedFailure,
         CatalogueApiActions.styleSavedFailure,
         CatalogueApiActions.brewhouseSavedFailure,
       ),

@@ -24,7 +24,7 @@ export const loadCatalogue = createEffect(
   (actions$ = inject(Actions), client = inject(CatalogueClient)) =>
     merge(
       actions$.pipe(ofType(...pagesNeedingCatalogue)),
-      actions$.pipe(ofType(CatalogueApiActions.importCommittedSuccess), filter(({ result }) => result.imported > 0)),
+      actions$.pipe(ofType(CatalogueApiActions.importCommittedSuccess), filter(({ result }) => result.imported + result.updated > 0)),
     ).pipe(
       switchMap(() =>
         client.catalogue(true).pipe(
@@ -102,8 +102,8 @@ export const commitImport = createEffect(
   (actions$ = inject(Actions), client = inject(CatalogueClient)) =>
     actions$.pipe(
       ofType(CataloguePageActions.importConfirmed),
-      exhaustMap(({ kind, csv }) =>
-        client.importCsv(kind, { csv, commit: true }).pipe(
+      exhaustMap(({ kind, csv, choices }) =>
+        client.importCsv(kind, { csv, commit: true, choices }).pipe(
           map((result) => CatalogueApiActions.importCommittedSuccess({ result })),
           catchError((error: unknown) => of(CatalogueApiActions.importCommittedFailure({ message: apiErrorMessage(error, 'The file could not be imported.') }))),
         ),
@@ -134,6 +134,20 @@ export const saveBrewhouse = createEffect(
         client.saveBrewhouse(settings).pipe(
           map((saved) => CatalogueApiActions.brewhouseSavedSuccess({ settings: saved })),
           catchError((error: unknown) => of(CatalogueApiActions.brewhouseSavedFailure({ message: apiErrorMessage(error, 'The brewhouse settings could not be saved.') }))),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+export const loadUsage = createEffect(
+  (actions$ = inject(Actions), client = inject(CatalogueClient)) =>
+    actions$.pipe(
+      ofType(CataloguePageActions.usageRequested),
+      switchMap(({ kind, id }) =>
+        client.usedIn(kind, id).pipe(
+          map((usage) => CatalogueApiActions.usageLoadedSuccess({ id, usage })),
+          catchError((error: unknown) => of(CatalogueApiActions.usageLoadedFailure({ id, message: apiErrorMessage(error, 'Where this entry is used could not be loaded.') }))),
         ),
       ),
     ),

@@ -1,72 +1,20 @@
-import { createEntityAdapter, EntityState } from '@ngrx/entity';
 import { createFeature, createReducer, createSelector, on } from '@ngrx/store';
-import {
-  BrewhouseSettings,
-  CatalogueImportResult,
-  Fermentable,
-  Hop,
-  IngredientCatalogue,
-  IngredientKind,
-  OtherAddition,
-  StyleTarget,
-  Yeast,
-} from '@shared/recipes';
+import { Fermentable, Hop, IngredientCatalogue, IngredientKind, OtherAddition, Yeast } from '@shared/recipes';
 import { AuthApiActions } from '@app/auth/state/auth-api.actions';
 import { CatalogueEntry } from '../catalogue-entry';
 import { CatalogueApiActions } from './catalogue-api.actions';
 import { CataloguePageActions } from './catalogue-page.actions';
+import {
+  CatalogueState,
+  fermentablesAdapter,
+  hopsAdapter,
+  initialCatalogueState,
+  othersAdapter,
+  stylesAdapter,
+  yeastsAdapter,
+} from './catalogue.state';
 
-/** A CSV file being checked before it is imported. */
-export interface ImportPreview {
-  kind: IngredientKind;
-  csv: string;
-  result: CatalogueImportResult;
-}
-
-export interface CatalogueState {
-  fermentables: EntityState<Fermentable>;
-  hops: EntityState<Hop>;
-  yeasts: EntityState<Yeast>;
-  others: EntityState<OtherAddition>;
-  styles: EntityState<StyleTarget>;
-  /** Null until the server has answered. */
-  brewhouse: BrewhouseSettings | null;
-  includeRetired: boolean;
-  search: string;
-  loaded: boolean;
-  loading: boolean;
-  loadError: string | null;
-  saving: boolean;
-  /** Counts saved entries so entry forms can clear after each one. */
-  savedCount: number;
-  importPreview: ImportPreview | null;
-  importing: boolean;
-}
-
-const byName = <T extends { name: string }>(a: T, b: T) => a.name.localeCompare(b.name);
-export const fermentablesAdapter = createEntityAdapter<Fermentable>({ sortComparer: byName });
-export const hopsAdapter = createEntityAdapter<Hop>({ sortComparer: byName });
-export const yeastsAdapter = createEntityAdapter<Yeast>({ sortComparer: byName });
-export const othersAdapter = createEntityAdapter<OtherAddition>({ sortComparer: byName });
-export const stylesAdapter = createEntityAdapter<StyleTarget>({ sortComparer: byName });
-
-export const initialCatalogueState: CatalogueState = {
-  fermentables: fermentablesAdapter.getInitialState(),
-  hops: hopsAdapter.getInitialState(),
-  yeasts: yeastsAdapter.getInitialState(),
-  others: othersAdapter.getInitialState(),
-  styles: stylesAdapter.getInitialState(),
-  brewhouse: null,
-  includeRetired: false,
-  search: '',
-  loaded: false,
-  loading: false,
-  loadError: null,
-  saving: false,
-  savedCount: 0,
-  importPreview: null,
-  importing: false,
-};
+export * from './catalogue.state';
 
 function withCatalogue(state: CatalogueState, catalogue: IngredientCatalogue): CatalogueState {
   return {
@@ -118,7 +66,11 @@ export const catalogueFeature = createFeature({
       (state): CatalogueState => ({ ...state, saving: true }),
     ),
     on(CatalogueApiActions.entrySavedSuccess, (state, { kind, entry }): CatalogueState =>
-      withEntry({ ...state, saving: false, savedCount: state.savedCount + 1 }, kind, entry),
+      withEntry(
+        { ...state, saving: false, savedCount: state.savedCount + 1, usagePanel: state.usagePanel?.id === entry.id && state.usagePanel.kind === kind ? null : state.usagePanel },
+        kind,
+        entry,
+      ),
     ),
     on(CatalogueApiActions.styleSavedSuccess, (state, { style }): CatalogueState => ({
       ...state,
@@ -142,10 +94,21 @@ export const catalogueFeature = createFeature({
       ...state,
       importing: false,
       // A refused file stays on screen with its problems; an imported one is done with.
-      importPreview: result.imported > 0 || result.problems.length === 0 ? null : state.importPreview && { ...state.importPreview, result },
+      importPreview: result.problems.length === 0 ? null : state.importPreview && { ...state.importPreview, result },
     })),
     on(CatalogueApiActions.importPreviewedFailure, CatalogueApiActions.importCommittedFailure, (state): CatalogueState => ({ ...state, importing: false })),
     on(CataloguePageActions.importDismissed, (state): CatalogueState => ({ ...state, importPreview: null })),
+    on(CataloguePageActions.usageRequested, (state, { kind, id, name, purpose }): CatalogueState => ({
+      ...state,
+      usagePanel: { kind, id, name, purpose, usage: null, error: null },
+    })),
+    on(CatalogueApiActions.usageLoadedSuccess, (state, { id, usage }): CatalogueState =>
+      state.usagePanel?.id === id ? { ...state, usagePanel: { ...state.usagePanel, usage } } : state,
+    ),
+    on(CatalogueApiActions.usageLoadedFailure, (state, { id, message }): CatalogueState =>
+      state.usagePanel?.id === id ? { ...state, usagePanel: { ...state.usagePanel, error: message } } : state,
+    ),
+    on(CataloguePageActions.usageDismissed, (state): CatalogueState => ({ ...state, usagePanel: null })),
     on(AuthApiActions.signOutSuccess, AuthApiActions.sessionExpired, (): CatalogueState => initialCatalogueState),
   ),
   extraSelectors: ({ selectFermentables, selectHops, selectYeasts, selectOthers, selectStyles }) => ({

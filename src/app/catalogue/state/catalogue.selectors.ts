@@ -48,6 +48,7 @@ export const selectCataloguePageViewModel = createSelector(
       savedCount: state.savedCount,
       importPreview: state.importPreview,
       importing: state.importing,
+      usagePanel: state.usagePanel,
     };
   },
 );

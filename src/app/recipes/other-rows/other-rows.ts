@@ -5,10 +5,10 @@ import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
-import { OtherAddition } from '@shared/recipes';
+import { OTHER_UNITS, OtherAddition, RECIPE_LIMITS } from '@shared/recipes';
 import { OtherGroup } from '../recipe-form/recipe-form-groups';
 
-/** Other additions (spices, finings, water agents…): amount in a free unit and when it goes in. */
+/** Other additions (spices, finings, water agents…): amount in one of the fixed units and when it goes in. */
 @Component({
   selector: 'cw-other-rows',
   imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatInput, MatSelect, MatOption, MatButton, MatIconButton, MatIcon],
@@ -22,4 +22,7 @@ export class OtherRows {
   readonly editable = input(true);
   readonly addRequested = output<void>();
   readonly removeRequested = output<number>();
+
+  protected readonly units = OTHER_UNITS;
+  protected readonly limits = RECIPE_LIMITS.otherAmount;
 }

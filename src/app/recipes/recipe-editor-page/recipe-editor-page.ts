@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, effect, ElementRef, injec
 import { Store } from '@ngrx/store';
 import { authFeature } from '@app/auth/state/auth.feature';
 import { RecipeDesign, RecipeVisibility, UnitSystem } from '@shared/recipes';
+import { CatalogueUpdateOffer } from '../catalogue-update-offer/catalogue-update-offer';
 import { PredictionPanel } from '../prediction-panel/prediction-panel';
 import { PredictionSummary } from '../prediction-summary/prediction-summary';
 import { RecipeActions } from '../recipe-actions/recipe-actions';
@@ -10,12 +11,18 @@ import { RecipeUnavailable } from '../recipe-unavailable/recipe-unavailable';
 import { ScalePanel } from '../scale-panel/scale-panel';
 import { RecipeEditorPageActions } from '../state/recipe-editor-page.actions';
 import { unsavedEditsFeature } from '../state/unsaved-edits.feature';
-import { selectEditorPrediction, selectEditorStyle, selectEditorStyleComparison, selectRecipeEditorViewModel } from '../state/recipes.selectors';
+import {
+  selectEditorCatalogueUpdate,
+  selectEditorPrediction,
+  selectEditorStyle,
+  selectEditorStyleComparison,
+  selectRecipeEditorViewModel,
+} from '../state/recipes.selectors';
 
 /** New and existing recipes: the form, its live predictions and what can be done with the recipe. */
 @Component({
   selector: 'cw-recipe-editor-page',
-  imports: [RecipeForm, PredictionPanel, PredictionSummary, RecipeActions, ScalePanel, RecipeUnavailable],
+  imports: [RecipeForm, PredictionPanel, PredictionSummary, RecipeActions, ScalePanel, RecipeUnavailable, CatalogueUpdateOffer],
   templateUrl: './recipe-editor-page.html',
   styleUrl: './recipe-editor-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -32,6 +39,7 @@ export class RecipeEditorPage {
   protected readonly style = this.store.selectSignal(selectEditorStyle);
   protected readonly isAdmin = this.store.selectSignal(authFeature.selectIsAdmin);
   protected readonly unsaved = this.store.selectSignal(unsavedEditsFeature.selectUnsaved);
+  protected readonly catalogueUpdate = this.store.selectSignal(selectEditorCatalogueUpdate);
   protected readonly scaling = signal(false);
   private readonly panel = viewChild(PredictionPanel, { read: ElementRef });
   protected readonly heading = computed(() => {
@@ -101,6 +109,11 @@ export class RecipeEditorPage {
   protected exportRecipe(): void {
     const recipe = this.vm().recipe;
     if (recipe) this.store.dispatch(RecipeEditorPageActions.exportRequested({ recipeId: recipe.id }));
+  }
+
+  protected updateToCatalogue(): void {
+    const recipe = this.vm().recipe;
+    if (recipe) this.store.dispatch(RecipeEditorPageActions.catalogueUpdateRequested({ recipeId: recipe.id }));
   }
 
   protected changeUnits(unitSystem: UnitSystem): void {

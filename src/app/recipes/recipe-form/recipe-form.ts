@@ -5,12 +5,12 @@ import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
-import { IngredientCatalogue, RecipeDesign, StyleTarget, unitLabel, UnitSystem } from '@shared/recipes';
+import { IngredientCatalogue, NAME_MAX_LENGTH, RECIPE_LIMITS, RecipeDesign, StyleTarget, unitLabel, UnitSystem } from '@shared/recipes';
 import { FermentableRows } from '../fermentable-rows/fermentable-rows';
 import { HopRows } from '../hop-rows/hop-rows';
 import { MashStepRows } from '../mash-step-rows/mash-step-rows';
 import { OtherRows } from '../other-rows/other-rows';
-import { limitIn, MAX_MINUTES, recipeRowGroups, SI_LIMITS } from './recipe-form-groups';
+import { limitIn, MAX_MINUTES, minimumIn, recipeRowGroups, SI_LIMITS } from './recipe-form-groups';
 import { ExactAmounts } from './exact-amounts';
 import { designToFormValue, formValueToDesign } from '../view-models/recipe-form-model';
 
@@ -40,13 +40,17 @@ export class RecipeForm {
 
   protected readonly rows = recipeRowGroups(this.fb, () => this.form?.controls.boilMinutes.value ?? null);
   protected readonly form = this.fb.group({
-    name: ['', [Validators.required, Validators.maxLength(100)]],
+    name: ['', [Validators.required, Validators.maxLength(NAME_MAX_LENGTH)]],
     styleId: this.fb.control<number | null>(null),
     batchVolume: this.fb.control<number | null>(null),
-    mashEfficiencyPercent: this.fb.control<number | null>(null, [Validators.required, Validators.min(20), Validators.max(100)]),
-    boilMinutes: this.fb.control<number | null>(null, [Validators.required, Validators.min(0), Validators.max(MAX_MINUTES)]),
+    mashEfficiencyPercent: this.fb.control<number | null>(null, [
+      Validators.required,
+      Validators.min(RECIPE_LIMITS.mashEfficiencyPercent.min),
+      Validators.max(RECIPE_LIMITS.mashEfficiencyPercent.max),
+    ]),
+    boilMinutes: this.fb.control<number | null>(null, [Validators.required, Validators.min(RECIPE_LIMITS.boilMinutes.min), Validators.max(MAX_MINUTES)]),
     yeastId: this.fb.control<number | null>(null),
-    notes: ['', Validators.maxLength(5000)],
+    notes: ['', Validators.maxLength(RECIPE_LIMITS.notesLength)],
     fermentables: this.fb.array([this.rows.fermentable('metric')]),
     hops: this.fb.array([this.rows.hop('metric')]),
     mashSteps: this.fb.array([this.rows.mashStep({ name: '', temperature: null, minutes: null }, 'metric')]),
@@ -122,7 +126,11 @@ export class RecipeForm {
     const value = designToFormValue(source, system);
     this.form.setControl('fermentables', this.fb.array(value.fermentables.map((row) => this.rows.fermentable(system, row))), { emitEvent: false });
     this.form.setControl('hops', this.fb.array(value.hops.map((row) => this.rows.hop(system, row))), { emitEvent: false });
-    this.form.controls.batchVolume.setValidators([Validators.required, Validators.min(0.5), Validators.max(limitIn('volume', SI_LIMITS.batchVolumeLitres, system))]);
+    this.form.controls.batchVolume.setValidators([
+      Validators.required,
+      Validators.min(minimumIn('volume', RECIPE_LIMITS.batchVolumeLitres.min, system)),
+      Validators.max(limitIn('volume', SI_LIMITS.batchVolumeLitres, system)),
+    ]);
     this.form.setControl('mashSteps', this.fb.array(value.mashSteps.map((row) => this.rows.mashStep(row, system))), { emitEvent: false });
     this.form.setControl('others', this.fb.array(value.others.map((row) => this.rows.other(row))), { emitEvent: false });
     this.form.patchValue(value, { emitEvent: false });

@@ -3,7 +3,7 @@ import { provideRouter } from '@angular/router';
 import { MockStore, provideMockStore } from '@ngrx/store/testing';
 import { generateMockCatalogue, generateMockDesign, MOCK_BREWHOUSE, predictRecipe } from '@shared/recipes';
 import { generateMockRecipe, generateMockVersion } from '@app/testing/recipe-mock';
-import { designDifferences } from '../view-models/design-differences';
+import { versionDifferences } from '../view-models/version-differences';
 import { RecipeVersionsPageActions } from '../state/recipe-versions-page.actions';
 import { selectRecipeVersionsViewModel } from '../state/recipes.selectors';
 import { RecipeVersionsPage } from './recipe-versions-page';
@@ -30,8 +30,12 @@ describe('RecipeVersionsPage', () => {
                   ? {
                       left,
                       right,
-                      rows: designDifferences(left.design, right.design, catalogue, 'metric'),
-                      predictions: [predictRecipe(left.design, catalogue, MOCK_BREWHOUSE), predictRecipe(right.design, catalogue, MOCK_BREWHOUSE)],
+                      rows: versionDifferences(
+                        left,
+                        right,
+                        [predictRecipe(left.design, catalogue, MOCK_BREWHOUSE), predictRecipe(right.design, catalogue, MOCK_BREWHOUSE)],
+                        'metric',
+                      ),
                     }
                   : null,
               },
@@ -61,7 +65,8 @@ describe('RecipeVersionsPage', () => {
     const { element } = await render(true);
 
     const changed = [...element.querySelectorAll('[data-testid="changed-row"] th')].map((th) => th.textContent?.trim());
-    expect(changed).toEqual(['Batch volume']);
-    expect(element.querySelector('[role="status"]')?.textContent).toContain('1 line differs between version 1 and version 2');
+    // Doubling the volume halves gravity points, bitterness and colour; nothing else was changed.
+    expect(changed).toEqual(['OG', 'FG', 'ABV density-based (%)', 'IBU', 'Colour (SRM)', 'Batch volume']);
+    expect(element.querySelector('[role="status"]')?.textContent).toContain(`${changed.length} lines differ between version 1 and version 2`);
   });
 });

@@ -10,12 +10,13 @@ import {
   fromDisplayUnits,
   IngredientCatalogue,
   predictRecipe,
+  RECIPE_LIMITS,
   RecipeDesign,
   scaleRecipe,
   unitLabel,
   UnitSystem,
 } from '@shared/recipes';
-import { limitIn, SI_LIMITS } from '../recipe-form/recipe-form-groups';
+import { limitIn, minimumIn, SI_LIMITS } from '../recipe-form/recipe-form-groups';
 import { shownAmount } from '../view-models/recipe-form-model';
 
 /** Scales the design to another batch volume or efficiency, keeping OG and IBU; shows before and after. */
@@ -36,8 +37,12 @@ export class ScalePanel {
   readonly closed = output<void>();
 
   protected readonly form = this.fb.group({
-    volume: this.fb.control<number | null>(null, [Validators.required, Validators.min(0.5)]),
-    efficiency: this.fb.control<number | null>(null, [Validators.required, Validators.min(20), Validators.max(100)]),
+    volume: this.fb.control<number | null>(null, [Validators.required]),
+    efficiency: this.fb.control<number | null>(null, [
+      Validators.required,
+      Validators.min(RECIPE_LIMITS.mashEfficiencyPercent.min),
+      Validators.max(RECIPE_LIMITS.mashEfficiencyPercent.max),
+    ]),
   });
   private readonly formValue = toSignal(this.form.valueChanges, { initialValue: this.form.getRawValue() });
   protected readonly volumeUnit = computed(() => unitLabel('volume', this.unitSystem()));
@@ -62,7 +67,11 @@ export class ScalePanel {
       const design = this.design();
       const system = this.unitSystem();
       untracked(() => {
-        this.form.controls.volume.setValidators([Validators.required, Validators.min(0.5), Validators.max(limitIn('volume', SI_LIMITS.batchVolumeLitres, system))]);
+        this.form.controls.volume.setValidators([
+          Validators.required,
+          Validators.min(minimumIn('volume', RECIPE_LIMITS.batchVolumeLitres.min, system)),
+          Validators.max(limitIn('volume', SI_LIMITS.batchVolumeLitres, system)),
+        ]);
         this.form.setValue({ volume: shownAmount('volume', design.batchVolumeLitres, system), efficiency: design.mashEfficiencyPercent });
       });
     });

@@ -15,5 +15,6 @@ export const RecipeEditorPageActions = createActionGroup({
     'Export Requested': props<{ recipeId: number }>(),
     'Design Scaled': props<{ design: RecipeDesign }>(),
     'Unit System Changed': props<{ unitSystem: UnitSystem }>(),
+    'Catalogue Update Requested': props<{ recipeId: number }>(),
   },
 });

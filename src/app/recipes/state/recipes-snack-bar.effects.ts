@@ -34,12 +34,29 @@ export const showRecipeSuccess = createEffect(
   { functional: true, dispatch: false },
 );
 
+export const showRecipeNotice = createEffect(
+  (actions$ = inject(Actions), snackBar = inject(MatSnackBar)) =>
+    actions$.pipe(
+      ofType(RecipesApiActions.recipeSaveUnchanged, RecipesApiActions.recipeUpdatedToCatalogueSuccess),
+      map((action) =>
+        action.type === RecipesApiActions.recipeSaveUnchanged.type
+          ? `Nothing changed since version ${action.version}, so no new version was saved.`
+          : action.recipe.version === action.previousVersion
+            ? `Version ${action.recipe.version} already has the catalogue's current values.`
+            : `Version ${action.recipe.version} uses the catalogue's current values; version ${action.previousVersion} keeps its own.`,
+      ),
+      tap((message) => snackBar.open(message, 'Dismiss', { duration: SNACK_DURATION_MS })),
+    ),
+  { functional: true, dispatch: false },
+);
+
 // A recipe or list that cannot be loaded is said on its page, with the way back, not a second time here.
 export const showRecipeFailure = createEffect(
   (actions$ = inject(Actions), snackBar = inject(MatSnackBar)) =>
     actions$.pipe(
       ofType(
         RecipesApiActions.recipeSavedFailure,
+        RecipesApiActions.recipeUpdatedToCatalogueFailure,
         RecipesApiActions.recipeUpdatedFailure,
         RecipesApiActions.recipeClonedFailure,
         RecipesApiActions.recipeExportedFailure,

@@ -1,8 +1,8 @@
 import { HttpErrorResponse } from '@angular/common/http';
 import { Actions } from '@ngrx/effects';
-import { Action } from '@ngrx/store';
+import { Action, Store } from '@ngrx/store';
 import { firstValueFrom, Observable, of, throwError, toArray } from 'rxjs';
-import { generateMockDesign, RECIPE_EXPORT_FORMAT } from '@shared/recipes';
+import { generateMockDesign, Recipe, RECIPE_EXPORT_FORMAT } from '@shared/recipes';
 import { generateMockRecipe, generateMockVersion } from '@app/testing/recipe-mock';
 import { RecipesClient } from '../recipes-client';
 import { RecipeEditorPageActions } from './recipe-editor-page.actions';
@@ -15,6 +15,8 @@ import { loadVersionPair } from './recipe-versions.effects';
 import { saveRecipe, updateRecipe } from './recipes.effects';
 
 const actionsOf = (...actions: Action[]) => new Actions(of(...actions));
+/** A store whose open recipe is `current`, for effects that compare with it. */
+const storeWith = (current: Recipe | null) => ({ select: () => of(current) }) as unknown as Store;
 const fakeClient = (overrides: Partial<Record<keyof RecipesClient, (...args: never[]) => Observable<unknown>>>) => overrides as unknown as RecipesClient;
 
 describe('recipes effects', () => {
@@ -23,7 +25,7 @@ describe('recipes effects', () => {
     const client = fakeClient({ create: jest.fn(() => of(recipe)), save: jest.fn() });
     const design = generateMockDesign();
 
-    const result = await firstValueFrom(saveRecipe(actionsOf(RecipeEditorPageActions.saveSubmitted({ recipeId: null, design, visibility: 'private' })), client));
+    const result = await firstValueFrom(saveRecipe(actionsOf(RecipeEditorPageActions.saveSubmitted({ recipeId: null, design, visibility: 'private' })), client, storeWith(null)));
 
     expect(client.create).toHaveBeenCalledWith({ design, visibility: 'private' });
     expect(client.save).not.toHaveBeenCalled();
@@ -33,12 +35,41 @@ describe('recipes effects', () => {
   it('saveRecipe saves an existing recipe as a new version', async () => {
     const recipe = generateMockRecipe({ version: 2 });
     const client = fakeClient({ save: jest.fn(() => of(recipe)) });
-    const design = generateMockDesign();
+    const design = generateMockDesign({ batchVolumeLitres: 40 });
 
-    const result = await firstValueFrom(saveRecipe(actionsOf(RecipeEditorPageActions.saveSubmitted({ recipeId: 41, design, visibility: 'coop' })), client));
+    const result = await firstValueFrom(
+      saveRecipe(actionsOf(RecipeEditorPageActions.saveSubmitted({ recipeId: 41, design, visibility: 'coop' })), client, storeWith(generateMockRecipe())),
+    );
 
     expect(client.save).toHaveBeenCalledWith(41, { design });
     expect(result).toEqual(RecipesApiActions.recipeSavedSuccess({ recipe }));
+  });
+
+  it('saveRecipe says nothing changed, without a request, when the design equals the open version', async () => {
+    const client = fakeClient({ save: jest.fn() });
+    const open = generateMockRecipe({ version: 3 });
+
+    const result = await firstValueFrom(
+      saveRecipe(actionsOf(RecipeEditorPageActions.saveSubmitted({ recipeId: 41, design: generateMockDesign(), visibility: 'private' })), client, storeWith(open)),
+    );
+
+    expect(client.save).not.toHaveBeenCalled();
+    expect(result).toEqual(RecipesApiActions.recipeSaveUnchanged({ version: 3 }));
+  });
+
+  it('saveRecipe says nothing changed when the server keeps the version number', async () => {
+    const open = generateMockRecipe({ version: 3 });
+    const client = fakeClient({ save: jest.fn(() => of(open)) });
+
+    const result = await firstValueFrom(
+      saveRecipe(
+        actionsOf(RecipeEditorPageActions.saveSubmitted({ recipeId: 41, design: generateMockDesign({ notes: 'x' }), visibility: 'private' })),
+        client,
+        storeWith(open),
+      ),
+    );
+
+    expect(result).toEqual(RecipesApiActions.recipeSaveUnchanged({ version: 3 }));
   });
 
   it('saveRecipe turns a refusal into Recipe Saved Failure with the server’s words and keeps listening', async () => {
@@ -46,7 +77,7 @@ describe('recipes effects', () => {
     const client = fakeClient({ save: jest.fn(() => throwError(() => refusal)) });
     const submit = RecipeEditorPageActions.saveSubmitted({ recipeId: 41, design: generateMockDesign(), visibility: 'private' });
 
-    const results = await firstValueFrom(saveRecipe(actionsOf(submit, submit), client).pipe(toArray()));
+    const results = await firstValueFrom(saveRecipe(actionsOf(submit, submit), client, storeWith(null)).pipe(toArray()));
 
     expect(results).toEqual([
       RecipesApiActions.recipeSavedFailure({ message: 'Only the owner may change this recipe.' }),

@@ -4,6 +4,7 @@ import { Actions, createEffect, ofType } from '@ngrx/effects';
 import { Action, Store } from '@ngrx/store';
 import { catchError, concatMap, exhaustMap, map, Observable, of, switchMap, tap, withLatestFrom } from 'rxjs';
 import { apiErrorMessage } from '@app/core/api-error-message';
+import { sameDesign } from '@shared/recipes';
 import { RecipesClient } from '../recipes-client';
 import { BrewDaySheetPageActions } from './brew-day-sheet-page.actions';
 import { RecipeEditorPageActions } from './recipe-editor-page.actions';
@@ -42,19 +43,47 @@ export const loadRecipe = createEffect(
   { functional: true },
 );
 
+/** A save of an unchanged design makes no request; a save the server finds unchanged keeps the version. */
 export const saveRecipe = createEffect(
-  (actions$ = inject(Actions), client = inject(RecipesClient)) =>
+  (actions$ = inject(Actions), client = inject(RecipesClient), store = inject(Store)) =>
     actions$.pipe(
       ofType(RecipeEditorPageActions.saveSubmitted),
-      exhaustMap(({ recipeId, design, visibility }) => {
+      withLatestFrom(store.select(recipesFeature.selectCurrent)),
+      exhaustMap(([{ recipeId, design, visibility }, current]) => {
+        if (recipeId !== null && current?.id === recipeId && sameDesign(current.design, design)) {
+          return of(RecipesApiActions.recipeSaveUnchanged({ version: current.version }));
+        }
         const saved$: Observable<Action> =
           recipeId === null
             ? client.create({ design, visibility }).pipe(map((recipe) => RecipesApiActions.recipeCreatedSuccess({ recipe })))
-            : client.save(recipeId, { design }).pipe(map((recipe) => RecipesApiActions.recipeSavedSuccess({ recipe })));
+            : client.save(recipeId, { design }).pipe(
+                map((recipe) =>
+                  recipe.version === current?.version && current.id === recipeId
+                    ? RecipesApiActions.recipeSaveUnchanged({ version: recipe.version })
+                    : RecipesApiActions.recipeSavedSuccess({ recipe }),
+                ),
+              );
         return saved$.pipe(
           catchError((error: unknown) => of(RecipesApiActions.recipeSavedFailure({ message: apiErrorMessage(error, 'The recipe could not be saved.') }))),
         );
       }),
+    ),
+  { functional: true },
+);
+
+export const updateToCatalogue = createEffect(
+  (actions$ = inject(Actions), client = inject(RecipesClient), store = inject(Store)) =>
+    actions$.pipe(
+      ofType(RecipeEditorPageActions.catalogueUpdateRequested),
+      withLatestFrom(store.select(recipesFeature.selectCurrent)),
+      exhaustMap(([{ recipeId }, current]) =>
+        client.updateToCatalogue(recipeId).pipe(
+          map((recipe) => RecipesApiActions.recipeUpdatedToCatalogueSuccess({ recipe, previousVersion: current?.version ?? recipe.version })),
+          catchError((error: unknown) =>
+            of(RecipesApiActions.recipeUpdatedToCatalogueFailure({ message: apiErrorMessage(error, 'The recipe could not be updated to the catalogue.') })),
+          ),
+        ),
+      ),
     ),
   { functional: true },
 );

@@ -1,7 +1,7 @@
 import { createSelector } from '@ngrx/store';
-import { compareToStyle, predictRecipe, shownAmountText } from '@shared/recipes';
+import { catalogueWithSnapshot, changesSinceSnapshot, compareToStyle, predictRecipe, sameDesign, shownAmountText } from '@shared/recipes';
 import { emptyDesign } from '../view-models/recipe-form-model';
-import { designDifferences } from '../view-models/design-differences';
+import { versionDifferences } from '../view-models/version-differences';
 import { brewDaySheet } from '../view-models/brew-day-sheet-model';
 import { catalogueFeature } from '@app/catalogue/state/catalogue.feature';
 import { selectBrewhouseOrDefault, selectCatalogue } from '@app/catalogue/state/catalogue.selectors';
@@ -37,9 +37,41 @@ export const selectRecipeListViewModel = createSelector(
 /** The design the editor shows: what is typed, else the open recipe's, else a fresh one. */
 export const selectEditorDesign = createSelector(recipesFeature.selectDraft, recipesFeature.selectCurrent, (draft, current) => draft ?? current?.design ?? emptyDesign());
 
+/**
+ * The ingredient values the editor predicts with: those the open version was saved with, and
+ * today's catalogue for anything added since.
+ */
+export const selectEditorCatalogue = createSelector(recipesFeature.selectCurrent, selectCatalogue, (current, catalogue) =>
+  current ? catalogueWithSnapshot(current.ingredients, catalogue) : catalogue,
+);
+
+/** The brewhouse of the open version, or today's for a new recipe. */
+export const selectEditorBrewhouse = createSelector(recipesFeature.selectCurrent, selectBrewhouseOrDefault, (current, brewhouse) => current?.brewhouse ?? brewhouse);
+
 /** The predictions of what is typed, from the shared library. */
-export const selectEditorPrediction = createSelector(recipesFeature.selectDraft, selectCatalogue, selectBrewhouseOrDefault, (draft, catalogue, brewhouse) =>
+export const selectEditorPrediction = createSelector(recipesFeature.selectDraft, selectEditorCatalogue, selectEditorBrewhouse, (draft, catalogue, brewhouse) =>
   draft ? predictRecipe(draft, catalogue, brewhouse) : null,
+);
+
+/** True when what is typed differs from the open version (or nothing is saved yet). */
+export const selectEditorHasEdits = createSelector(recipesFeature.selectDraft, recipesFeature.selectCurrent, (draft, current) =>
+  current === null ? draft !== null : draft !== null && !sameDesign(draft, current.design),
+);
+
+/**
+ * What today's catalogue and brewhouse hold differently from the open version: the owner may
+ * update to them, as a new version. Empty until both have loaded.
+ */
+export const selectEditorCatalogueUpdate = createSelector(
+  recipesFeature.selectCurrent,
+  selectCatalogue,
+  catalogueFeature.selectBrewhouse,
+  catalogueFeature.selectLoaded,
+  selectEditorHasEdits,
+  (current, catalogue, brewhouse, loaded, hasEdits) => ({
+    changes: current?.editable && !current.archived && loaded && brewhouse ? changesSinceSnapshot(current, catalogue, brewhouse) : [],
+    blockedByEdits: hasEdits,
+  }),
 );
 
 export const selectEditorStyle = createSelector(selectEditorDesign, catalogueFeature.selectStyles, (design, styles) =>
@@ -54,9 +86,9 @@ export const selectEditorStyleComparison = createSelector(selectEditorPrediction
 export const selectRecipeEditorViewModel = createSelector(
   recipesFeature.selectRecipesState,
   selectEditorDesign,
-  selectCatalogue,
+  selectEditorCatalogue,
   catalogueFeature.selectAllStyles,
-  selectBrewhouseOrDefault,
+  selectEditorBrewhouse,
   (state, design, catalogue, styles, brewhouse) => ({
     recipe: state.current,
     design,
@@ -72,34 +104,32 @@ export const selectRecipeEditorViewModel = createSelector(
   }),
 );
 
-/** The versions page: the list and, once two are picked, their differences and predictions side by side. */
-export const selectRecipeVersionsViewModel = createSelector(
-  recipesFeature.selectRecipesState,
-  selectCatalogue,
-  selectBrewhouseOrDefault,
-  (state, catalogue, brewhouse) => {
-    const pair = state.comparison;
-    return {
-      recipe: state.current,
-      versions: state.versions,
-      comparing: state.comparing,
-      comparison: pair && {
-        left: pair.left,
-        right: pair.right,
-        rows: designDifferences(pair.left.design, pair.right.design, catalogue, state.unitSystem),
-        predictions: [predictRecipe(pair.left.design, catalogue, brewhouse), predictRecipe(pair.right.design, catalogue, brewhouse)] as const,
-      },
-    };
-  },
-);
+/**
+ * The versions page: the list and, once two are picked, their differences side by side. Each
+ * version is predicted from its own snapshot, so later catalogue edits never move its figures.
+ */
+export const selectRecipeVersionsViewModel = createSelector(recipesFeature.selectRecipesState, (state) => {
+  const pair = state.comparison;
+  const predictionOf = (version: NonNullable<typeof pair>['left']) => predictRecipe(version.design, version.ingredients, version.brewhouse);
+  return {
+    recipe: state.current,
+    versions: state.versions,
+    comparing: state.comparing,
+    comparison: pair && {
+      left: pair.left,
+      right: pair.right,
+      rows: versionDifferences(pair.left, pair.right, [predictionOf(pair.left), predictionOf(pair.right)], state.unitSystem),
+    },
+  };
+});
 
-/** The brew-day sheet of the open recipe. */
+/** The brew-day sheet of the open recipe's saved version, from what that version was saved with. */
 export const selectBrewDaySheetViewModel = createSelector(
   recipesFeature.selectCurrent,
-  selectCatalogue,
-  selectBrewhouseOrDefault,
   catalogueFeature.selectStyles,
   recipesFeature.selectUnitSystem,
-  (recipe, catalogue, brewhouse, styles, unitSystem) =>
-    recipe ? brewDaySheet(recipe, catalogue, brewhouse, recipe.styleId === null ? null : (styles.entities[recipe.styleId] ?? null), unitSystem) : null,
+  (recipe, styles, unitSystem) =>
+    recipe
+      ? brewDaySheet(recipe, recipe.ingredients, recipe.brewhouse, recipe.styleId === null ? null : (styles.entities[recipe.styleId] ?? null), unitSystem)
+      : null,
 );

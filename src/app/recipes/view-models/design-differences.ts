@@ -52,10 +52,20 @@ function sideOf(design: RecipeDesign, catalogue: IngredientCatalogue, system: Un
   return { Basics: basics, Fermentables: fermentables, 'Hop additions': hops, 'Mash steps': mash, 'Other additions': others };
 }
 
-/** The two designs line by line; an ingredient found on one side only shows "—" on the other. */
-export function designDifferences(left: RecipeDesign, right: RecipeDesign, catalogue: IngredientCatalogue, system: UnitSystem): DesignDifference[] {
+/**
+ * The two designs line by line; an ingredient found on one side only shows "—" on the other. Names
+ * come from each side's own catalogue (a saved version's snapshot); a line is changed exactly when
+ * its shown text differs.
+ */
+export function designDifferences(
+  left: RecipeDesign,
+  right: RecipeDesign,
+  catalogue: IngredientCatalogue,
+  system: UnitSystem,
+  rightCatalogue: IngredientCatalogue = catalogue,
+): DesignDifference[] {
   const a = sideOf(left, catalogue, system);
-  const b = sideOf(right, catalogue, system);
+  const b = sideOf(right, rightCatalogue, system);
   return Object.keys(a).flatMap((section) => {
     const keys = [...new Set([...a[section].keys(), ...b[section].keys()])];
     return keys.map((key) => {

@@ -1,4 +1,4 @@
-import { HopUse, RecipeDesign, UnitSystem, fromDisplayUnits, toDisplayUnits, RecipeQuantity } from '@shared/recipes';
+import { HopUse, OtherUnit, RecipeDesign, UnitSystem, fromDisplayUnits, toDisplayUnits, RecipeQuantity } from '@shared/recipes';
 
 /** What the form holds: amounts in the person's units; empty fields are null. */
 export interface RecipeFormValue {
@@ -12,7 +12,7 @@ export interface RecipeFormValue {
   fermentables: { fermentableId: number | null; amount: number | null }[];
   hops: { hopId: number | null; amount: number | null; time: number | null; use: HopUse }[];
   mashSteps: { name: string; temperature: number | null; minutes: number | null }[];
-  others: { otherId: number | null; amount: number | null; unit: string; when: string }[];
+  others: { otherId: number | null; amount: number | null; unit: OtherUnit; when: string }[];
 }
 
 // Shown to a sensible precision; a stored metric amount is never rounded.
@@ -58,7 +58,7 @@ export function formValueToDesign(value: RecipeFormValue, system: UnitSystem): R
     fermentables: value.fermentables.map((row) => ({ fermentableId: row.fermentableId ?? 0, amountKg: stored('grain-mass', row.amount, system) })),
     hops: value.hops.map((row) => ({ hopId: row.hopId ?? 0, amountGrams: stored('hop-mass', row.amount, system), time: row.time ?? 0, use: row.use })),
     mashSteps: value.mashSteps.map((row) => ({ name: row.name.trim(), temperatureC: stored('temperature', row.temperature, system), minutes: row.minutes ?? 0 })),
-    others: value.others.map((row) => ({ otherId: row.otherId ?? 0, amount: row.amount ?? 0, unit: row.unit.trim(), when: row.when.trim() })),
+    others: value.others.map((row) => ({ otherId: row.otherId ?? 0, amount: row.amount ?? 0, unit: row.unit, when: row.when.trim() })),
   };
 }
 

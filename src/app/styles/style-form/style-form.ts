@@ -3,14 +3,15 @@ import { AbstractControl, NonNullableFormBuilder, ReactiveFormsModule, Validatio
 import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
-import { STYLE_TARGET_KEYS, StyleTarget, StyleTargetInput, StyleTargetKey } from '@shared/recipes';
+import { NAME_MAX_LENGTH, STYLE_TARGET_KEYS, STYLE_TARGET_LIMITS, StyleTarget, StyleTargetInput, StyleTargetKey } from '@shared/recipes';
 
+// The bounds are the shared limits the server checks too.
 const BOUNDS: Record<StyleTargetKey, { label: string; min: number; max: number; step: number }> = {
-  og: { label: 'OG', min: 1, max: 1.2, step: 0.001 },
-  fg: { label: 'FG', min: 0.98, max: 1.2, step: 0.001 },
-  abv: { label: 'ABV (% vol)', min: 0, max: 25, step: 0.1 },
-  ibu: { label: 'IBU', min: 0, max: 150, step: 1 },
-  colourSrm: { label: 'Colour (SRM)', min: 0, max: 80, step: 0.5 },
+  og: { label: 'OG', ...STYLE_TARGET_LIMITS.og, step: 0.001 },
+  fg: { label: 'FG', ...STYLE_TARGET_LIMITS.fg, step: 0.001 },
+  abv: { label: 'ABV (% vol)', ...STYLE_TARGET_LIMITS.abv, step: 0.1 },
+  ibu: { label: 'IBU', ...STYLE_TARGET_LIMITS.ibu, step: 1 },
+  colourSrm: { label: 'Colour (SRM)', ...STYLE_TARGET_LIMITS.colourSrm, step: 0.5 },
 };
 
 function orderedRange(group: AbstractControl): ValidationErrors | null {
@@ -36,7 +37,7 @@ export class StyleForm {
 
   protected readonly targets = STYLE_TARGET_KEYS.map((key) => ({ key, ...BOUNDS[key] }));
   protected readonly form = this.fb.group({
-    name: this.fb.control('', [Validators.required, Validators.maxLength(100)]),
+    name: this.fb.control('', [Validators.required, Validators.maxLength(NAME_MAX_LENGTH)]),
     og: this.range('og'),
     fg: this.range('fg'),
     abv: this.range('abv'),
