@@ -3,6 +3,7 @@
 import { ethanolWaterDensity, massFractionFromDensity, strengthBreakdown } from '@shared/science';
 import { evaluateOimlPolynomial } from '@shared/science/ethanol-water/oiml-density';
 import { runApiBench } from './bench/api-bench';
+import { benchChartRender } from './bench/chart-render-bench';
 
 const SAMPLES = 4096;
 // Short rounds, cases interleaved, best round kept: the machine is shared, and the best round is
@@ -66,13 +67,12 @@ function main(): void {
 }
 
 main();
-// The API part needs its own MariaDB; `npm run bench -- --science` skips it.
-if (!process.argv.includes('--science')) {
-  runApiBench().then(
-    () => process.exit(0),
-    (error) => {
-      console.error(error);
-      process.exit(1);
-    },
-  );
-}
+// The API part needs its own MariaDB; `npm run bench -- --science` skips it. The chart part needs only Chromium.
+const apiBench = process.argv.includes('--science') ? Promise.resolve() : runApiBench();
+apiBench.then(benchChartRender).then(
+  () => process.exit(0),
+  (error) => {
+    console.error(error);
+    process.exit(1);
+  },
+);

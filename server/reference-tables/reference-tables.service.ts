@@ -2,6 +2,7 @@ import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { ReferenceTableDetail, ReferenceTableList, RowCorrectionRequest } from '@shared/reference-tables';
 import { auditDensityTable, ScienceRangeError } from '@shared/science';
+import { LabTable } from '@shared/strength-check';
 import { recordAudit } from '../audit/audit-log';
 import { AppError } from '../errors/app-error';
 import { parseDensityTableCsv } from './density-table-csv';
@@ -22,6 +23,15 @@ export function createReferenceTablesService(db: Knex) {
 
   return {
     detail,
+
+    /** The table the lab analysis reads, with the densities in use; null for the built-in equation. */
+    async labTable(): Promise<{ id: number; name: string; lab: LabTable } | null> {
+      const id = await repo.labTableId(db);
+      const table = id === null ? null : await repo.find(db, id);
+      if (!table) return null;
+      const rows = (await repo.rows(db, table.id)).map((r) => ({ massPercent: r.massPercent, density: r.correctedDensity ?? r.uploadedDensity }));
+      return { id: table.id, name: table.name, lab: { temperature: table.temperature, rows } };
+    },
 
     async list(): Promise<ReferenceTableList> {
       const [tables, labTableId] = await Promise.all([repo.list(db), repo.labTableId(db)]);

@@ -96,3 +96,16 @@ describe('forecastFermentation', () => {
     expect(platoFromSg(result.curve[0].gravity)).toBeGreaterThan(10);
   });
 });
+
+describe('forecastFermentation on a logger\'s log', () => {
+  it('fits ten thousand noisy readings through binned means and still holds the true final gravity in its band', () => {
+    const days = Array.from({ length: 10_000 }, (_, i) => (8 * i) / 10_000);
+    const result = forecast(readings(days, 0.002, 11));
+    const trueFg = sgFromPlato(2.4);
+
+    expect(result.readingsUsed).toBe(10_000);
+    expect(result.finalGravityLow).toBeLessThanOrEqual(trueFg);
+    expect(result.finalGravityHigh).toBeGreaterThanOrEqual(trueFg);
+    expect(result.parameters.midpointDay).toBeCloseTo(2.5, 1);
+  });
+});

@@ -1,6 +1,7 @@
 import { platoFromSg, sgFromPlato, PLATO_MAX, PLATO_MIN } from '../science';
 import { CurveFit, levenbergMarquardt } from './levenberg-marquardt';
 import { dayWithinMargin, fromVector, logisticExtract, logisticGradient, LogisticParameters } from './logistic-extract-model';
+import { binReadings } from './reading-bins';
 import { studentT975 } from './student-t';
 
 /** One gravity reading: when (ms since the epoch) and the corrected SG 20/20 °C. */
@@ -38,6 +39,8 @@ export interface ForecastOptions {
 /** Fewest readings for a forecast: four parameters and at least two degrees of freedom. */
 export const MIN_FORECAST_READINGS = 6;
 const DAY_MS = 86_400_000;
+/** A logger's thousands of rows are averaged into this many stretches of time before fitting. */
+const MAX_FITTED_POINTS = 300;
 
 const model = { value: logisticExtract, gradient: logisticGradient };
 
@@ -81,14 +84,15 @@ export function forecastFermentation(readings: readonly GravityPoint[], options:
     return { status: 'not-enough-readings', message: `A forecast needs at least ${MIN_FORECAST_READINGS} readings; there are ${used}.`, readingsUsed: used };
   }
   const origin = sorted[0].time;
-  const days = sorted.map((r) => (r.time - origin) / DAY_MS);
-  const extracts = sorted.map((r) => platoFromSg(r.gravity));
+  const fitted = binReadings(sorted, MAX_FITTED_POINTS);
+  const days = fitted.map((r) => (r.time - origin) / DAY_MS);
+  const extracts = fitted.map((r) => platoFromSg(r.gravity));
   const fit = bestFit(days, extracts);
   const [pi, pe, rate] = fit.params;
   if (!(rate > 0) || !(pi - pe > 0.5) || !fit.covariance || !fit.covariance.flat().every(Number.isFinite)) {
     return { status: 'no-fall-yet', message: 'The readings do not yet show the fall of a fermentation; add more as it goes on.', readingsUsed: used };
   }
-  const t = studentT975(used - 4);
+  const t = studentT975(fitted.length - 4);
   const margin = options.finishMarginPlato ?? 0.25;
   const finishDay = (v: number[]) => Math.max(dayWithinMargin(v, margin), 0);
   const feHalf = t * Math.sqrt(Math.max(fit.covariance[1][1], 0));

@@ -5,5 +5,8 @@ export type { FermentationForecast, NoForecast, ForecastCurvePoint, GravityPoint
 /** Apparent extract of the logistic model at a day. */
 export { logisticExtract } from './logistic-extract-model';
 export type { LogisticParameters } from './logistic-extract-model';
+export * from './fermentation-chart-api';
+/** Averages readings into equal stretches of time before a fit. */
+export { binReadings } from './reading-bins';
 /** A small Levenberg–Marquardt fit with the covariance of its estimate. */
 export { levenbergMarquardt } from './levenberg-marquardt';

@@ -27,6 +27,11 @@ export const routes: Routes = [
         loadChildren: () => import('./strength-check/strength-check.routes').then((m) => m.strengthCheckRoutes),
       },
       {
+        path: 'fermentation',
+        title: 'Fermentation · Commonwort',
+        loadChildren: () => import('./fermentation/fermentation.routes').then((m) => m.fermentationRoutes),
+      },
+      {
         path: 'reference-tables',
         title: 'Reference tables · Commonwort',
         loadChildren: () => import('./reference-tables/reference-tables.routes').then((m) => m.referenceTablesRoutes),

@@ -1,5 +1,6 @@
 import { createSelector } from '@ngrx/store';
 import { authFeature } from '@app/auth/state/auth.feature';
+import { batchStrengthFeature } from './batch-strength.feature';
 import { toleranceClassesFeature } from './tolerance-classes.feature';
 
 /** The Strength check page: product classes, and whether the person may keep them. */
@@ -7,5 +8,6 @@ export const selectStrengthCheckPageViewModel = createSelector(
   toleranceClassesFeature.selectAllToleranceClasses,
   toleranceClassesFeature.selectToleranceClassesState,
   authFeature.selectIsAdmin,
-  (toleranceClasses, state, isAdmin) => ({ toleranceClasses, saving: state.saving, savedCount: state.savedCount, loadError: state.loadError, isAdmin }),
+  batchStrengthFeature.selectBatches,
+  (toleranceClasses, state, isAdmin, batches) => ({ toleranceClasses, saving: state.saving, savedCount: state.savedCount, loadError: state.loadError, isAdmin, batches }),
 );

@@ -5,12 +5,13 @@ import { catchError, concatMap, map, of, switchMap, tap } from 'rxjs';
 import { apiErrorMessage } from '@app/core/api-error-message';
 import { LabClient } from '../lab-client';
 import { LabApiActions } from './lab-api.actions';
+import { BatchStrengthPageActions } from './batch-strength-page.actions';
 import { StrengthCheckPageActions } from './strength-check-page.actions';
 
 export const loadToleranceClasses = createEffect(
   (actions$ = inject(Actions), client = inject(LabClient)) =>
     actions$.pipe(
-      ofType(StrengthCheckPageActions.opened),
+      ofType(StrengthCheckPageActions.opened, BatchStrengthPageActions.opened),
       switchMap(() =>
         client.toleranceClasses().pipe(
           map((toleranceClasses) => LabApiActions.toleranceClassesLoadedSuccess({ toleranceClasses })),

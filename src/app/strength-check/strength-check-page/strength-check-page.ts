@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, inject, OnInit, signal } from '@angular/core';
 import { Store } from '@ngrx/store';
 import { ToleranceClass, ToleranceClassInput } from '@shared/strength-check';
+import { BatchPicker } from '../batch-picker/batch-picker';
 import { BlendPlanner } from '../blend-planner/blend-planner';
 import { StrengthCautions } from '../strength-cautions/strength-cautions';
 import { StrengthConverter } from '../strength-converter/strength-converter';
@@ -12,7 +13,7 @@ import { ToleranceClassTable } from '../tolerance-class-table/tolerance-class-ta
 /** The Strength check area: converter, blending planner, and the product classes' tolerances. */
 @Component({
   selector: 'cw-strength-check-page',
-  imports: [StrengthConverter, BlendPlanner, StrengthCautions, ToleranceClassTable, ToleranceClassForm],
+  imports: [BatchPicker, StrengthConverter, BlendPlanner, StrengthCautions, ToleranceClassTable, ToleranceClassForm],
   templateUrl: './strength-check-page.html',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

@@ -1,0 +1,2 @@
+export { createStrengthCheckRouter } from './strength-check.routes';
+export { createStrengthCheckService, type StrengthCheckService } from './strength-check.service';
