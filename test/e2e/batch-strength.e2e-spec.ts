@@ -41,8 +41,8 @@ describe('A batch\'s fermentation chart and strength check in the browser', () =
     const density = (await page.getByTestId('density-based').locator('.value').textContent())!;
     const declared = (Math.round(Number(density.split('±')[0]) * 10) / 10).toFixed(1);
 
-    await page.getByLabel('Declared strength').fill(declared);
-    await page.getByLabel('Product class').click();
+    await page.getByRole('spinbutton', { name: 'Declared strength' }).fill(declared);
+    await page.getByRole('combobox', { name: 'Product class' }).click({ force: true });
     await page.getByRole('option', { name: new RegExp(seeded.toleranceClassName) }).click();
     await page.getByRole('button', { name: 'Check against the tolerance' }).click();
     await page.getByTestId('verdict').waitFor();
