@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { RouterLink } from '@angular/router';
 import { BatchSummary } from '@shared/batches';
 
-/** The co-op's batches, each opening its strength check. */
+/** The co-op's batches, each opening its strength check and its fermentation chart. */
 @Component({
   selector: 'cw-batch-picker',
   imports: [RouterLink],
@@ -12,7 +12,10 @@ import { BatchSummary } from '@shared/batches';
     } @else {
       <ul class="batches">
         @for (b of batches(); track b.id) {
-          <li><a [routerLink]="['/strength-check', 'batches', b.id]">{{ b.name }}</a> ({{ b.status }}, {{ b.brewerName }})</li>
+          <li>
+            <a [routerLink]="['/strength-check', 'batches', b.id]">{{ b.name }}</a> ({{ b.status }}, {{ b.brewerName }}) ·
+            <a [routerLink]="['/fermentation', b.id]">chart and forecast<span class="cw-visually-hidden"> of {{ b.name }}</span></a>
+          </li>
         }
       </ul>
     }
