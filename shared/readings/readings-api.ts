@@ -1,4 +1,4 @@
-import { GravityReading, GravityUnit, Instrument } from './gravity-reading';
+import { GravityReading, GravityUnit, Instrument, ReadingInput } from './gravity-reading';
 
 export const READINGS_PATH = '/api/readings';
 export const READINGS_PUSH_PATH = '/api/readings/push';
@@ -6,6 +6,9 @@ export const READINGS_PUSH_PATH = '/api/readings/push';
 /** Columns the readings table can be sorted by. */
 export const READING_SORT_COLUMNS = ['measuredAt', 'correctedSg', 'instrument'] as const;
 export type ReadingSortColumn = (typeof READING_SORT_COLUMNS)[number];
+
+/** What an edit of a reading may change: temperatures and note; the value as read stays as read. */
+export type ReadingChangesRequest = Partial<Pick<ReadingInput, 'sampleTemperatureC' | 'calibrationTemperatureC' | 'note'>>;
 
 /** One page of a batch's readings. */
 export interface ReadingPage {

@@ -20,6 +20,8 @@ export const routes: Routes = [
       { path: '', pathMatch: 'full', redirectTo: 'today' },
       { path: 'today', title: 'Today · Commonwort', loadChildren: () => import('./today/today.routes').then((m) => m.todayRoutes) },
       { path: 'recipes', title: 'Recipes · Commonwort', loadChildren: () => import('./recipes/recipes.routes').then((m) => m.recipesRoutes) },
+      { path: 'batches', title: 'Batches · Commonwort', loadChildren: () => import('./batches/batches.routes').then((m) => m.batchesRoutes) },
+      { path: 'gravity-log', title: 'Gravity log · Commonwort', loadChildren: () => import('./gravity-log/gravity-log.routes').then((m) => m.gravityLogRoutes) },
       { path: 'kit-room', title: 'Kit room · Commonwort', loadChildren: () => import('./kit-room/kit-room.routes').then((m) => m.kitRoomRoutes) },
       {
         path: 'strength-check',

@@ -17,8 +17,8 @@ export interface NavItem {
 export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Today', path: '/today', icon: 'today', available: true, roles: null, summary: 'Your day at the co-op.' },
   { label: 'Recipes', path: '/recipes', icon: 'menu_book', available: true, roles: null, summary: 'Recipes with live predictions.' },
-  { label: 'Batches', path: '/batches', icon: 'science', available: false, roles: null, summary: 'Batches from recipe to packaging.' },
-  { label: 'Gravity log', path: '/gravity-log', icon: 'water_drop', available: false, roles: null, summary: 'Gravity readings of a batch.' },
+  { label: 'Batches', path: '/batches', icon: 'science', available: true, roles: null, summary: 'Batches from recipe to packaging.' },
+  { label: 'Gravity log', path: '/gravity-log', icon: 'water_drop', available: true, roles: null, summary: 'Gravity readings of a batch.' },
   { label: 'Strength check', path: '/strength-check', icon: 'percent', available: true, roles: null, summary: 'Strength converter, blending planner and tolerances.' },
   { label: 'Reference tables', path: '/reference-tables', icon: 'table_chart', available: true, roles: null, summary: 'Density tables: the built-in equation and uploaded tables, audited.' },
   { label: 'Kit room', path: '/kit-room', icon: 'kitchen', available: true, roles: null, summary: 'The shared kit and its bookings.' },

@@ -4,16 +4,27 @@ import { provideMockStore } from '@ngrx/store/testing';
 import { Role } from '@shared/auth';
 import { initialAuthState } from '@app/auth/state/auth.feature';
 import { generateMockSessionUser } from '@app/testing/session-user-mock';
+import { initialBatchesState } from '@app/batches/state/batches.feature';
+import { BatchSummary } from '@shared/batches';
 import { TodayPage } from './today-page';
 
+const fermenting: BatchSummary = {
+  id: 7, name: 'Test pale', status: 'fermenting', brewerId: 1, brewerName: 'Priya Raman', brewDate: '2026-11-28', plannedVolumeLitres: 20,
+  fermenterId: 1, fermenterCode: 'F1', recipeId: null, recipeVersion: null,
+  progress: { latestSg: 1.0123, latestAt: '2026-12-01T10:00:00Z', readingCount: 12, apparentAttenuationPercent: 76.4, abvSoFar: 5.1, finished: true, stuck: false },
+};
+
 describe('TodayPage', () => {
-  async function render(roles: Role[]): Promise<HTMLElement> {
+  async function render(roles: Role[], batches: BatchSummary[] = []): Promise<HTMLElement> {
     TestBed.configureTestingModule({
       imports: [TodayPage],
       providers: [
         provideRouter([]),
         provideMockStore({
-          initialState: { auth: { ...initialAuthState, sessionLoaded: true, user: generateMockSessionUser(roles) } },
+          initialState: {
+            auth: { ...initialAuthState, sessionLoaded: true, user: generateMockSessionUser(roles) },
+            batches: { ...initialBatchesState, mine: true, ids: batches.map((b) => b.id), entities: Object.fromEntries(batches.map((b) => [b.id, b])) },
+          },
         }),
       ],
     });
@@ -30,17 +41,28 @@ describe('TodayPage', () => {
     expect([...element.querySelectorAll('cw-role-badge')].map((badge) => badge.textContent?.trim())).toEqual(['member', 'brewer']);
   });
 
-  it('shows a member the cards of the other built areas open to everyone', async () => {
+  it('shows a member the cards of the areas open to them so far', async () => {
     const element = await render(['member']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/strength-check', '/reference-tables', '/kit-room']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room']);
+  });
+
+  it('lists my active batches with latest gravity, attenuation and the finished flag', async () => {
+    const element = await render(['member'], [fermenting]);
+
+    const row = element.querySelector('cw-my-batches li')!;
+    expect(row.querySelector('a')?.getAttribute('href')).toBe('/gravity-log/7');
+    expect(row.textContent).toContain('Fermenting · F1');
+    expect(row.textContent).toContain('SG 1.012');
+    expect(row.textContent).toContain('76 % attenuated');
+    expect(row.textContent).toContain('Looks finished');
   });
 
   it('shows a Members card linking to /members for an admin', async () => {
     const element = await render(['member', 'admin']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/strength-check', '/reference-tables', '/kit-room', '/members']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/members']);
   });
 });

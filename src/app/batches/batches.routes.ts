@@ -1,0 +1,20 @@
+import { Routes } from '@angular/router';
+import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
+import { provideEffects } from '@ngrx/effects';
+import { provideState } from '@ngrx/store';
+import * as batchChangesEffects from './state/batch-changes.effects';
+import * as batchesUiEffects from './state/batches-ui.effects';
+import * as batchesEffects from './state/batches.effects';
+import { batchesFeature } from './state/batches.feature';
+
+export const batchesRoutes: Routes = [
+  {
+    path: '',
+    providers: [provideLuxonDateAdapter(), provideState(batchesFeature), provideEffects(batchesEffects, batchChangesEffects, batchesUiEffects)],
+    children: [
+      { path: '', loadComponent: () => import('./batch-list-page/batch-list-page').then((m) => m.BatchListPage) },
+      { path: 'new', title: 'Start a batch · Commonwort', loadComponent: () => import('./batch-start-page/batch-start-page').then((m) => m.BatchStartPage) },
+      { path: ':batchId', title: 'Batch · Commonwort', loadComponent: () => import('./batch-page/batch-page').then((m) => m.BatchPage) },
+    ],
+  },
+];

@@ -1,0 +1,28 @@
+import { createActionGroup, props } from '@ngrx/store';
+import { Batch } from '@shared/batches';
+import { GravityReading, IssuedPushToken, PushTokenSummary, ReadingImportResult, ReadingPage } from '@shared/readings';
+
+export const ReadingsApiActions = createActionGroup({
+  source: 'Readings API',
+  events: {
+    'Batch Loaded Success': props<{ batch: Batch }>(),
+    'Batch Loaded Failure': props<{ message: string }>(),
+    'Readings Loaded Success': props<{ page: ReadingPage }>(),
+    'Readings Loaded Failure': props<{ message: string }>(),
+    'Reading Added Success': props<{ reading: GravityReading }>(),
+    'Reading Added Failure': props<{ message: string; fields: Record<string, string> | null }>(),
+    'Reading Deleted Success': props<{ readingId: number }>(),
+    'Reading Deleted Failure': props<{ message: string }>(),
+    'Import Progressed': props<{ percent: number }>(),
+    'Import Finished': props<{ result: ReadingImportResult }>(),
+    'Import Failed': props<{ message: string }>(),
+    'Correction Factor Set Success': props<{ batch: Batch }>(),
+    'Correction Factor Set Failure': props<{ message: string }>(),
+    'Push Tokens Loaded Success': props<{ tokens: PushTokenSummary[] }>(),
+    'Push Tokens Loaded Failure': props<{ message: string }>(),
+    'Push Token Created Success': props<{ token: IssuedPushToken }>(),
+    'Push Token Created Failure': props<{ message: string }>(),
+    'Push Token Revoked Success': props<{ tokenId: number }>(),
+    'Push Token Revoked Failure': props<{ message: string }>(),
+  },
+});
