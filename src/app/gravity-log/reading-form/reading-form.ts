@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component, effect, inject, input, output, untracked } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { ErrorStateMatcher } from '@angular/material/core';
 import { MatButton } from '@angular/material/button';
 import { MatDatepicker, MatDatepickerInput, MatDatepickerToggle } from '@angular/material/datepicker';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
@@ -34,6 +35,8 @@ export class ReadingForm {
   protected readonly unitLabels = UNIT_LABELS;
   protected readonly limits = L;
   private readonly fb = inject(NonNullableFormBuilder);
+  /** Errors show once a field was left or the form refused, not merely because an earlier reading was sent. */
+  protected readonly touchedOnly: ErrorStateMatcher = { isErrorState: (control) => !!control && control.invalid && control.touched };
   private readonly unit = this.fb.control<GravityUnit>('sg');
   protected readonly form = this.fb.group({
     date: [null as DateTime | null, Validators.required],
