@@ -1,4 +1,4 @@
-import { recipesRepository } from '@server/recipes/recipes.repository';
+import { createRecipesService } from '@server/recipes';
 import { createFermenter } from '../integration/helpers/batch-factory';
 import { createCatalogueEntries, sampleDesign } from '../integration/helpers/catalogue-factory';
 import { createUser } from '../integration/helpers/user-factory';
@@ -17,7 +17,8 @@ describe('Batches and the gravity log in the browser', () => {
   it('when a member starts a batch from a recipe, logs three readings and uploads a CSV with one bad row, then the line error shows and the good rows are imported', async () => {
     const member = await createUser(env.server.db, ['member'], { name: 'Bea Batch' });
     const ids = await createCatalogueEntries(env.server.db);
-    await recipesRepository.insert(env.server.db, { ownerId: member.id, visibility: 'private', design: sampleDesign(ids, `Batch pale ${ids.tag}`) });
+    const owner = { id: member.id, email: member.email, name: 'Bea Batch', roles: member.roles };
+    await createRecipesService(env.server.db).create(owner, sampleDesign(ids, `Batch pale ${ids.tag}`), 'private');
     const fermenterId = await createFermenter(env.server.db);
     const fermenter = await env.server.db('kit_items').where({ id: fermenterId }).first();
     const { context, page } = await newPage(env.browser, env.server.baseUrl);
