@@ -3,16 +3,9 @@
 import { ethanolWaterDensity, massFractionFromDensity, strengthBreakdown } from '@shared/science';
 import { evaluateOimlPolynomial } from '@shared/science/ethanol-water/oiml-density';
 import { runApiBench } from './bench/api-bench';
-// The API parts need their own MariaDB; `npm run bench -- --science` skips them. The chart part needs only Chromium.
-const apiBench = process.argv.includes('--science') ? Promise.resolve() : runApiBench().then(() => benchReadingsApi(join(__dirname, '..')));
-apiBench.then(benchChartRender).then(
-  () => process.exit(0),
-  (error) => {
-    console.error(error);
-    process.exit(1);
-  },
-);
-
+import { benchChartRender } from './bench/chart-render-bench';
+import { join } from 'node:path';
+import { benchReadingsApi } from './bench/readings-api-bench';
 const SAMPLES = 4096;
 // Short rounds, cases interleaved, best round kept: the machine is shared, and the best round is
 // the one least disturbed by other work.
