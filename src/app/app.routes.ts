@@ -45,6 +45,13 @@ export const routes: Routes = [
         loadChildren: () => import('./members/members.routes').then((m) => m.membersRoutes),
       },
       { path: 'profile', title: 'Your profile · Commonwort', loadChildren: () => import('./profile/profile.routes').then((m) => m.profileRoutes) },
+      { path: 'dues', title: 'Dues · Commonwort', loadChildren: () => import('./dues/dues.routes').then((m) => m.duesRoutes) },
+      {
+        path: 'outbox',
+        title: 'Outbox · Commonwort',
+        canActivate: [roleGuard(['admin'])],
+        loadChildren: () => import('./outbox/outbox.routes').then((m) => m.outboxRoutes),
+      },
       {
         path: 'not-allowed',
         title: 'Not allowed · Commonwort',

@@ -23,7 +23,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Reference tables', path: '/reference-tables', icon: 'table_chart', available: true, roles: null, summary: 'Density tables: the built-in equation and uploaded tables, audited.' },
   { label: 'Kit room', path: '/kit-room', icon: 'kitchen', available: true, roles: null, summary: 'The shared kit and its bookings.' },
   { label: 'Brew plan', path: '/brew-plan', icon: 'calendar_month', available: false, roles: null, summary: 'The production calendar.' },
-  { label: 'Dues', path: '/dues', icon: 'payments', available: false, roles: null, summary: 'Plans, payments and receipts.' },
+  { label: 'Dues', path: '/dues', icon: 'payments', available: true, roles: null, summary: 'Your dues: pay by card, keep a card for renewal, see your receipts.' },
   {
     label: 'Members',
     path: '/members',
@@ -31,5 +31,13 @@ export const NAV_ITEMS: readonly NavItem[] = [
     available: true,
     roles: ['admin'],
     summary: 'People, roles and invitations: invite new members, change roles, hand out reset links.',
+  },
+  {
+    label: 'Outbox',
+    path: '/outbox',
+    icon: 'mail',
+    available: true,
+    roles: ['admin'],
+    summary: 'Every e-mail the app writes: sent, waiting or failed, and each as it was sent.',
   },
 ];

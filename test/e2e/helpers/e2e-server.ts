@@ -2,7 +2,7 @@ import { Server as HttpServer } from 'node:http';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { Knex } from 'knex';
-import { createApp } from '@server/app';
+import { createApp, CreatedApp } from '@server/app';
 import { loadConfig } from '@server/config';
 import { createDb } from '@server/db';
 import { freePort } from '../../../scripts/setup/free-port';
@@ -11,6 +11,8 @@ import { freePort } from '../../../scripts/setup/free-port';
 export interface E2eServer {
   baseUrl: string;
   db: Knex;
+  /** The scheduled work (outbox sweep, renewals), run on demand by the specs. */
+  jobs: CreatedApp['jobs'];
   stop(): Promise<void>;
 }
 
@@ -22,13 +24,14 @@ export async function startE2eServer(): Promise<E2eServer> {
   const db = createDb(config.db);
   // Browser journeys all come from 127.0.0.1 and share the database's counters: a loose address limit.
   const signInLimits = { perAccountAndAddress: 5, windowSeconds: 900, perAddress: 10_000, addressWindowSeconds: 60 };
-  const { app, close } = createApp({ config, db, sessionCleanupMs: 0, signInLimits, publicRequestLimit: { points: 10_000, windowSeconds: 60 } });
+  const { app, close, jobs } = createApp({ config, db, sessionCleanupMs: 0, signInLimits, publicRequestLimit: { points: 10_000, windowSeconds: 60 } });
   const server: HttpServer = await new Promise((resolve) => {
     const s = app.listen(port, '127.0.0.1', () => resolve(s));
   });
   return {
     baseUrl: config.publicUrl,
     db,
+    jobs,
     async stop() {
       await new Promise((resolve) => server.close(resolve));
       server.closeAllConnections();

@@ -45,7 +45,7 @@ describe('TodayPage', () => {
     const element = await render(['member']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/dues']);
   });
 
   it('lists my active batches with latest gravity, attenuation and the finished flag', async () => {
@@ -59,10 +59,10 @@ describe('TodayPage', () => {
     expect(row.textContent).toContain('Looks finished');
   });
 
-  it('shows a Members card linking to /members for an admin', async () => {
+  it('shows Members and Outbox cards to an admin', async () => {
     const element = await render(['member', 'admin']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/members']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/dues', '/members', '/outbox']);
   });
 });

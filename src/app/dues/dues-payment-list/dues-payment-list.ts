@@ -1,0 +1,28 @@
+import { ChangeDetectionStrategy, Component, input, output, signal } from '@angular/core';
+import { DatePipe } from '@angular/common';
+import { MatButton } from '@angular/material/button';
+import { DuesPayment, formatDuesAmount } from '@shared/dues';
+
+/** Payments, newest first; for admins each card or cash payment can be refunded after a second click. */
+@Component({
+  selector: 'cw-dues-payment-list',
+  imports: [MatButton, DatePipe],
+  templateUrl: './dues-payment-list.html',
+  styleUrl: './dues-payment-list.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class DuesPaymentList {
+  readonly payments = input.required<DuesPayment[]>();
+  readonly showMember = input(false);
+  readonly refundable = input(false);
+  readonly pending = input(false);
+  readonly refundConfirmed = output<number>();
+
+  protected readonly amount = formatDuesAmount;
+  protected readonly confirmingId = signal<number | null>(null);
+
+  protected refund(paymentId: number): void {
+    this.confirmingId.set(null);
+    this.refundConfirmed.emit(paymentId);
+  }
+}
