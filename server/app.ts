@@ -45,10 +45,10 @@ import { createStrengthCheckRouter, createStrengthCheckService } from './strengt
 import { createFermentationRouter } from './fermentation/fermentation.routes';
 import { createBatchesRouter, createBatchesService } from './batches';
 import { createBatchReadingsRouter, createPushRouter, createPushTokensService, createReadingsRouter, createReadingsService, DEFAULT_PUSH_RATE_LIMIT, PushRateLimit } from './readings';
-import { createDuesLedgerService, createDuesPaymentsService, createDuesRenewalsService, createDuesRouter, createStripeGateway, DuesRenewalsService } from './dues';
+import { createDuesLedgerService, createDuesPaymentsService, createDuesRenewalsService, createDuesRouter, createDuesStanding, createStripeGateway, DuesRenewalsService } from './dues';
 import { createMailRouter, createMailSender, createOutboxDispatcher, createOutboxService, OutboxDispatcher } from './mail';
 import { processHolderId, startScheduler } from './scheduler/scheduler';
-import { createBookingFeedService, createBookingsRouter, createBookingsService } from './bookings';
+import { BookingNotices, bookingsRepository, createBookingFeedService, createBookingNotices, createBookingsRouter, createBookingsService } from './bookings';
 import { createKitRouter, createKitService } from './kit';
 
 export interface AppDeps {
@@ -70,7 +70,7 @@ export interface AppDeps {
 export interface CreatedApp {
   app: Express;
   /** The scheduled work, also callable directly. */
-  jobs: { outbox: OutboxDispatcher; dues: DuesRenewalsService };
+  jobs: { outbox: OutboxDispatcher; dues: DuesRenewalsService; bookingReminders: BookingNotices };
   close(): void;
 }
 
@@ -138,7 +138,9 @@ export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAU
   mountApi(app, '/api/dues', createDuesRouter(duesLedger, createDuesPaymentsService(duesDeps)));
   mountApi(app, '/api/admin/mail', createMailRouter(createOutboxService(db)));
   mountApi(app, '/api/kit', createKitRouter(createKitService(db)));
-  const bookings = createBookingsService({ db, coopTimeZone: config.coopTimeZone });
+  const bookingNotices = createBookingNotices({ db, coopTimeZone: config.coopTimeZone, publicUrl: config.publicUrl });
+  const duesStanding = createDuesStanding({ db, coopTimeZone: config.coopTimeZone });
+  const bookings = createBookingsService({ db, coopTimeZone: config.coopTimeZone, duesStanding: duesStanding.standingOf, notices: bookingNotices });
   mountApi(app, '/api/bookings', createBookingsRouter(bookings, createBookingFeedService(db, config.publicUrl)));
   const referenceTables = createReferenceTablesService(db);
   const toleranceClasses = createToleranceClassesService(db);
@@ -154,7 +156,8 @@ export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAU
   const holder = processHolderId();
   const jobs = {
     outbox: createOutboxDispatcher({ db, send: createMailSender(config.smtp), holder }),
-    dues: createDuesRenewalsService(duesDeps),
+    dues: createDuesRenewalsService({ ...duesDeps, upcomingBookings: bookingsRepository.countUpcomingForUser }),
+    bookingReminders: bookingNotices,
   };
   const scheduler = runScheduler
     ? startScheduler({
@@ -165,6 +168,7 @@ export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAU
           { name: 'outbox', everySeconds: config.mailDispatchSeconds, exclusive: false, run: () => jobs.outbox.dispatchDue() },
           { name: 'dues-renewals', everySeconds: 3600, exclusive: true, run: () => jobs.dues.runRenewals() },
           { name: 'dues-overdue-reminders', everySeconds: 3600, exclusive: true, run: () => jobs.dues.sendOverdueReminders() },
+          { name: 'booking-reminders', everySeconds: 3600, exclusive: true, run: () => jobs.bookingReminders.remindTomorrow() },
         ],
       })
     : null;

@@ -62,6 +62,18 @@ export const bookingsRepository = {
     return (await query).map(toBooking);
   },
 
+  /** Members' bookings (not maintenance blocks) that start in [from, to): the reminders of a day. */
+  async listUseStartingBetween(db: Knex, from: Date, to: Date): Promise<Booking[]> {
+    const rows = await liveBookings(db).where('bookings.purpose', 'use').where('bookings.starts_at', '>=', from).where('bookings.starts_at', '<', to).orderBy('bookings.starts_at');
+    return rows.map(toBooking);
+  },
+
+  /** How many of a member's bookings have not started yet. */
+  async countUpcomingForUser(db: Knex, userId: number, now: Date): Promise<number> {
+    const [row] = await db('bookings').where({ user_id: userId, purpose: 'use' }).whereNull('cancelled_at').where('starts_at', '>', now).count<{ n: number }[]>({ n: '*' });
+    return Number(row.n);
+  },
+
   async listForUserEndingAfter(db: Knex, userId: number, after: Date): Promise<Booking[]> {
     const rows = await liveBookings(db).where('bookings.user_id', userId).where('bookings.ends_at', '>', after).orderBy('bookings.starts_at');
     return rows.map(toBooking);

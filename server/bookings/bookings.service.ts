@@ -6,6 +6,7 @@ import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { AppError, forbidden } from '../errors/app-error';
 import { assertItemFree, lockBookableItem } from './booking-holds';
 import { bookedFor, linkedBatch } from './booking-party';
+import { BookingNotices } from './booking-notices';
 import { bookingTimes, calendarRange } from './booking-times';
 import { bookingsRepository } from './bookings.repository';
 import { DuesStanding, everyoneMayBook } from './dues-standing';
@@ -15,13 +16,15 @@ export interface BookingsServiceDeps {
   coopTimeZone: string;
   /** Whether dues allow a person new bookings; everyone until dues are kept. */
   duesStanding?: DuesStanding;
+  /** Confirmation e-mails, queued with the booking. */
+  notices?: Pick<BookingNotices, 'bookingMade'>;
 }
 
 const bookingNotFound = () => new AppError('booking-not-found', 'No booking has this id.', 404);
 const isAdmin = (user: SessionUser) => user.roles.includes('admin');
 
 /** Kit bookings: one item never has two holds at once, decided under the item's row lock. */
-export function createBookingsService({ db, coopTimeZone, duesStanding = everyoneMayBook }: BookingsServiceDeps) {
+export function createBookingsService({ db, coopTimeZone, duesStanding = everyoneMayBook, notices }: BookingsServiceDeps) {
   /** New bookings need dues in order; existing ones stay whatever happens to dues. */
   async function assertMayBook(userId: number): Promise<void> {
     const standing = await duesStanding(userId);
@@ -72,6 +75,7 @@ export function createBookingsService({ db, coopTimeZone, duesStanding = everyon
           batchId,
         });
         await recordAudit(trx, { actorUserId: user.id, action: 'booking-created', subjectType: 'booking', subjectId: newId, detail: { kitItemId: request.kitItemId, userId, purpose } });
+        await notices?.bookingMade(trx, newId);
         return newId;
       });
       return get(id);

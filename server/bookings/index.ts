@@ -2,3 +2,5 @@ export { createBookingFeedService, type BookingFeedService } from './booking-fee
 export { createBookingsRouter } from './bookings.routes';
 export { createBookingsService, type BookingsService, type BookingsServiceDeps } from './bookings.service';
 export { everyoneMayBook, type DuesStanding, type DuesStandingResult } from './dues-standing';
+export { createBookingNotices, type BookingNotices } from './booking-notices';
+export { bookingsRepository } from './bookings.repository';

@@ -4,6 +4,7 @@ import { ApiClient } from './helpers/api-client';
 import { createKitItem, wallClockFromToday } from './helpers/kit-factory';
 import { startServerProcess, ServerProcess } from './helpers/server-process';
 import { testConfig } from './helpers/test-app';
+import { givePaidUpDues } from './helpers/dues-factory';
 import { createUser } from './helpers/user-factory';
 
 describe('Bookings across two server processes on one database', () => {
@@ -21,7 +22,13 @@ describe('Bookings across two server processes on one database', () => {
   it('when 50 overlapping requests for one item are split between two processes, then exactly one succeeds and 49 answer 409', async () => {
     const zone = testConfig().coopTimeZone;
     const item = await createKitItem(db);
-    const clients = await Promise.all(servers.map(async (server) => ApiClient.signedIn(server.baseUrl, await createUser(db))));
+    const clients = await Promise.all(
+      servers.map(async (server) => {
+        const user = await createUser(db);
+        await givePaidUpDues(db, user.id);
+        return ApiClient.signedIn(server.baseUrl, user);
+      }),
+    );
 
     const responses = await Promise.all(
       Array.from({ length: 50 }, (_, i) =>

@@ -2,6 +2,8 @@ import { randomUUID } from 'node:crypto';
 import { createOutboxDispatcher, outboxRepository } from '@server/mail';
 import { startMailCatcher } from '../../scripts/setup/mail-catcher';
 import { ApiClient } from './helpers/api-client';
+import { givePaidUpDues } from './helpers/dues-factory';
+import { createKitItem, wallClockFromToday } from './helpers/kit-factory';
 import { caughtMailTo } from './helpers/caught-mail';
 import { startServerProcess } from './helpers/server-process';
 import { createTestApp, TestApp } from './helpers/test-app';
@@ -26,17 +28,20 @@ describe('Outbox delivery', () => {
     await t.db.destroy();
   });
 
-  it('when SMTP is down, then an invitation waits in the outbox; once SMTP is back, two server processes deliver it exactly once', async () => {
+  it('when SMTP is down, then a booking confirmation waits in the outbox; once SMTP is back, two server processes deliver it exactly once', async () => {
     const catcher = await startMailCatcher({ smtpPort: 0, apiPort: 0 });
     await catcher.stopSmtp();
     const mailDown = createTestApp({ env: { SMTP_PORT: String(catcher.smtpPort) } });
-    const admin = await ApiClient.signedIn(mailDown.app, await createUser(mailDown.db, ['member', 'admin']));
-    const email = `outbox-${randomUUID()}@test.example`;
+    const member = await createUser(mailDown.db);
+    await givePaidUpDues(mailDown.db, member.id);
+    const item = await createKitItem(mailDown.db);
+    const client = await ApiClient.signedIn(mailDown.app, member);
+    const email = member.email;
 
-    const invited = await admin.send('post', '/api/invitations', { email, roles: ['member'] });
+    const booked = await client.send('post', '/api/bookings', { kitItemId: item.id, start: wallClockFromToday(t.config.coopTimeZone, 60, 9), end: wallClockFromToday(t.config.coopTimeZone, 61, 9) });
     const row = (await t.db('outbox_messages').where({ recipient: email }).first())!;
-    expect(invited.status).toBe(201);
-    expect(row).toMatchObject({ kind: 'invitation', state: 'queued' });
+    expect(booked.status).toBe(201);
+    expect(row).toMatchObject({ kind: 'booking-confirmation', state: 'queued' });
 
     expect(await mailDown.jobs.outbox.dispatchDue([row.id])).toBe(0);
     const failed = (await t.db('outbox_messages').where({ id: row.id }).first())!;
@@ -59,9 +64,9 @@ describe('Outbox delivery', () => {
 
     const caught = await caughtMailTo(email);
     expect(caught).toHaveLength(1);
-    expect(caught[0].subject).toContain('invited');
-    expect(caught[0].text).toContain(invited.body.link);
-    expect(caught[0].html).toContain(invited.body.link);
+    expect(caught[0].subject).toBe(`Booked: ${item.code} from ${booked.body.startLocal.replace('T', ' ')}`);
+    expect(caught[0].text).toContain(item.code);
+    expect(caught[0].html).toContain(item.code);
     expect((await t.db('outbox_messages').where({ id: row.id }).first())!.attempts).toBe(2);
   }, 90_000);
 

@@ -18,3 +18,9 @@ export async function paidThroughOf(db: Knex, userId: number): Promise<string | 
   const row = await db('dues_memberships').where({ user_id: userId }).first();
   return row?.paid_through ? row.paid_through.toISOString().slice(0, 10) : null;
 }
+
+/** Dues paid through a date well ahead, so the person may book the kit. */
+export async function givePaidUpDues(db: Knex, userId: number, daysAhead = 60): Promise<void> {
+  const paidThrough = new Date(Date.now() + daysAhead * 86_400_000).toISOString().slice(0, 10);
+  await db('dues_memberships').insert({ user_id: userId, paid_through: paidThrough }).onConflict('user_id').merge();
+}
