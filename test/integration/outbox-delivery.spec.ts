@@ -68,7 +68,7 @@ describe('Outbox delivery', () => {
     expect(caught[0].text).toContain(item.code);
     expect(caught[0].html).toContain(item.code);
     expect((await t.db('outbox_messages').where({ id: row.id }).first())!.attempts).toBe(2);
-  }, 90_000);
+  }, 240_000);
 
   it('when two dispatchers sweep the same outbox at once, then each message is sent once', async () => {
     const recipients = Array.from({ length: 12 }, () => `sweep-${randomUUID()}@test.example`);

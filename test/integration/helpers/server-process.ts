@@ -17,12 +17,14 @@ export interface ServerProcess {
 const root = join(__dirname, '..', '..', '..');
 
 async function waitForHealth(baseUrl: string, child: ChildProcess, output: () => string): Promise<void> {
-  for (let i = 0; i < 300; i++) {
+  // Generous: tsx compiles the whole server first, and a loaded machine makes that slow.
+  for (let i = 0; i < 800; i++) {
     if (child.exitCode !== null) break;
     const ok = await fetch(`${baseUrl}/api/health`).then((res) => res.ok, () => false);
     if (ok) return;
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
+  child.kill('SIGTERM');
   throw new Error(`The server process did not come up:\n${output()}`);
 }
 
