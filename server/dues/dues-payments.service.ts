@@ -2,7 +2,7 @@ import { Knex } from 'knex';
 import { PayDuesRequest, RecordCashPaymentRequest } from '@shared/dues';
 import { recordAudit } from '../audit/audit-log';
 import { AppError } from '../errors/app-error';
-import { retryOnDeadlock } from '../http/retry-deadlock';
+import { retryOnDeadlock } from '../database/retry-on-deadlock';
 import { usersRepository } from '../users/users.repository';
 import { coopToday } from './dues-clock';
 import { settlePayment } from './dues-settlement';

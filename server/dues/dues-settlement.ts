@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { DuesPlan, nextDuesPeriod } from '@shared/dues';
 import { recordAudit } from '../audit/audit-log';
-import { retryOnDeadlock } from '../http/retry-deadlock';
+import { retryOnDeadlock } from '../database/retry-on-deadlock';
 import { OutgoingMail } from '../mail/mail-message';
 import { outboxRepository } from '../mail/outbox.repository';
 import { duesReceiptMail, renewalResultMail } from '../mail/templates/dues-mails';
