@@ -56,7 +56,7 @@ describe('Outbox delivery', () => {
     expect((await officer.send('post', `/api/admin/mail/${row.id}/retry`)).status).toBe(200);
     const servers = await Promise.all([startServerProcess({ MAIL_DISPATCH_SECONDS: '1' }), startServerProcess({ MAIL_DISPATCH_SECONDS: '1' })]);
     try {
-      await waitForState(t, row.id, 'sent', 20_000);
+      await waitForState(t, row.id, 'sent', 90_000);
       await pause(2500);
     } finally {
       await Promise.all(servers.map((server) => server.stop()));
