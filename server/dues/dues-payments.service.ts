@@ -2,7 +2,7 @@ import { Knex } from 'knex';
 import { PayDuesRequest, RecordCashPaymentRequest } from '@shared/dues';
 import { recordAudit } from '../audit/audit-log';
 import { AppError } from '../errors/app-error';
-import { retryOnDeadlock } from '../database/retry-on-deadlock';
+import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { usersRepository } from '../users/users.repository';
 import { coopToday } from './dues-clock';
 import { settlePayment } from './dues-settlement';
@@ -75,8 +75,7 @@ export function createDuesPaymentsService(deps: DuesDeps) {
       if (!payment) throw new AppError('payment-not-found', 'No payment has this id.', 404);
       if (payment.status === 'refunded') throw new AppError('already-refunded', 'This payment was refunded already.', 409);
       const refundId = payment.stripe_charge_id ? await gateway.refund(payment.stripe_charge_id, `refund:${payment.id}`) : null;
-      await retryOnDeadlock(() =>
-        db.transaction(async (trx) => {
+      await transactionWithRetry(db, async (trx) => {
           const membership = await duesRepository.lockMembership(trx, payment.user_id);
           const locked = await duesRepository.lockPayment(trx, paymentId);
           if (!locked || locked.status === 'refunded') return;
@@ -85,8 +84,8 @@ export function createDuesPaymentsService(deps: DuesDeps) {
             await duesRepository.updateMembership(trx, locked.user_id, { paid_through: isoDate(locked.previous_paid_through) });
           }
           await recordAudit(trx, { actorUserId: actorId, action: 'dues-refunded', subjectType: 'dues_payment', subjectId: paymentId, detail: { refundId, amountCents: locked.amount_cents, currency: locked.currency } });
-        }),
-      );
+        })
+      ;
     },
   };
 }

@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { DuesPlan, nextDuesPeriod } from '@shared/dues';
 import { recordAudit } from '../audit/audit-log';
-import { retryOnDeadlock } from '../database/retry-on-deadlock';
+import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { OutgoingMail } from '../mail/mail-message';
 import { outboxRepository } from '../mail/outbox.repository';
 import { duesReceiptMail, renewalResultMail } from '../mail/templates/dues-mails';
@@ -31,7 +31,7 @@ const isDuplicate = (error: unknown) => (error as { code?: string }).code === 'E
  */
 export async function settlePayment(db: Knex, taken: TakenPayment, today: string, duesUrl: string): Promise<number> {
   try {
-    return await retryOnDeadlock(() => db.transaction(async (trx) => {
+    return await transactionWithRetry(db, async (trx) => {
       const membership = await duesRepository.lockMembership(trx, taken.userId);
       const existing = await duesRepository.findPaymentByKey(trx, taken.idempotencyKey);
       if (existing) return existing.id;
@@ -72,7 +72,7 @@ export async function settlePayment(db: Knex, taken: TakenPayment, today: string
         detail: { userId: taken.userId, plan: taken.plan.name, amountCents: taken.plan.amountCents, currency: taken.plan.currency, paidThrough: period.end },
       });
       return id;
-    }));
+    });
   } catch (error) {
     // A parallel retry with the same key got there first: that one payment stands.
     if (!isDuplicate(error)) throw error;
