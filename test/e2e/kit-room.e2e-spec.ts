@@ -1,5 +1,6 @@
 import { DateTime } from 'luxon';
 import { loadConfig } from '@server/config';
+import { givePaidUpDues } from '../integration/helpers/dues-factory';
 import { createUser } from '../integration/helpers/user-factory';
 import { newPage, seriousA11yViolations } from './helpers/browser';
 import { useE2eEnvironment } from './helpers/e2e-environment';
@@ -19,6 +20,7 @@ describe('Kit room in the browser', () => {
   it('when a member books F2 for next week, then the booking shows in the calendar and in my bookings', async () => {
     await fermenterF2();
     const member = await createUser(env.server.db, ['member'], { name: 'Nell Kitroom' });
+    await givePaidUpDues(env.server.db, member.id);
     const zone = loadConfig().coopTimeZone;
     const nextMonday = DateTime.now().setZone(zone).startOf('week').plus({ weeks: 1 });
     const startDay = nextMonday.plus({ days: 1 }).toISODate()!;
