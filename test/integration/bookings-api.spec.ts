@@ -211,8 +211,11 @@ describe('Bookings API with batches', () => {
     const zone = t.config.coopTimeZone;
     const item = await createKitItem(t.db);
     const brewer = await createUser(t.db);
+    const otherMember = await createUser(t.db);
+    await givePaidUpDues(t.db, brewer.id);
+    await givePaidUpDues(t.db, otherMember.id);
     const brewerClient = await ApiClient.signedIn(t.app, brewer);
-    const other = await ApiClient.signedIn(t.app, await createUser(t.db));
+    const other = await ApiClient.signedIn(t.app, otherMember);
     const batch = await startBatch(brewerClient, { name: 'Porch pale', fermenterId: item.id });
     const moved = await brewerClient.send('post', `/api/batches/${batch.id}/status`, { status: 'fermenting', confirmSkip: true });
     expect(moved.status).toBe(200);
