@@ -8,7 +8,7 @@ export const strengthCheckPage = {
   },
 
   async convert(page: Page, quantity: string, value: string, temperature: string): Promise<void> {
-    await page.getByLabel('I know the').click();
+    await page.getByRole('combobox', { name: 'I know the' }).click();
     await page.getByRole('option', { name: quantity, exact: true }).click();
     await page.getByLabel('Value', { exact: true }).fill(value);
     await page.getByLabel('Temperature t of the sample').fill(temperature);
