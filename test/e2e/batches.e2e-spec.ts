@@ -59,6 +59,12 @@ describe('Batches and the gravity log in the browser', () => {
     expect(stored.map((r) => r.source).sort()).toEqual(['file', 'file', 'hand', 'hand', 'hand']);
     await page.locator('cw-readings-table').getByText('logger.csv').first().waitFor();
     expect(await gravityLogPage.rowCount(page)).toBe(5);
+
+    await page.locator('.batch-links').getByRole('link', { name: 'Chart and forecast' }).click();
+    await page.getByRole('heading', { level: 1, name: `Fermentation: Batch pale ${ids.tag}` }).waitFor();
+    await page.goBack();
+    await page.locator('.batch-links').getByRole('link', { name: 'Strength check' }).click();
+    await page.getByRole('heading', { level: 1, name: `Strength check: Batch pale ${ids.tag}` }).waitFor();
     await context.close();
   }, 120_000);
 
