@@ -4,6 +4,7 @@ import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { Store } from '@ngrx/store';
 import { BATCH_STATUS_LABELS, BatchStatus, BrewDayMeasurements, skippedStatuses } from '@shared/batches';
+import { BatchAnalysisLinks } from '../batch-analysis-links/batch-analysis-links';
 import { BrewDayForm } from '../brew-day-form/brew-day-form';
 import { ProgressSummary } from '../progress-summary/progress-summary';
 import { StatusFlow } from '../status-flow/status-flow';
@@ -13,7 +14,7 @@ import { selectBatchPageViewModel } from '../state/batches.selectors';
 /** One batch: status and its dates, brew-day measurements beside the predictions, fermentation so far. */
 @Component({
   selector: 'cw-batch-page',
-  imports: [RouterLink, MatButton, MatIcon, StatusFlow, BrewDayForm, ProgressSummary],
+  imports: [RouterLink, MatButton, MatIcon, StatusFlow, BrewDayForm, ProgressSummary, BatchAnalysisLinks],
   templateUrl: './batch-page.html',
   styleUrl: './batch-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -6,6 +6,7 @@ import { RouterLink } from '@angular/router';
 import { Store } from '@ngrx/store';
 import { CorrectionFactorRequest } from '@shared/batches';
 import { GravityReading, PushTokenSummary, ReadingInput, ReadingSortColumn } from '@shared/readings';
+import { BatchAnalysisLinks } from '@app/batches/batch-analysis-links/batch-analysis-links';
 import { ProgressSummary } from '@app/batches/progress-summary/progress-summary';
 import { CorrectionFactorPanel } from '../correction-factor-panel/correction-factor-panel';
 import { PushTokensPanel } from '../push-tokens-panel/push-tokens-panel';
@@ -20,6 +21,7 @@ import { selectGravityLogViewModel } from '../state/gravity-log.selectors';
 @Component({
   selector: 'cw-gravity-log-page',
   imports: [
+    BatchAnalysisLinks,
     RouterLink, MatAnchor, MatIcon, MatExpansionPanel, MatExpansionPanelHeader, MatExpansionPanelTitle,
     ProgressSummary, ReadingForm, ReadingsTable, ReadingUpload, PushTokensPanel, CorrectionFactorPanel,
   ],
