@@ -12,7 +12,8 @@ import { checkFermenter } from './fermenter-check';
 /**
  * Moves a batch forward and records when. A move that passes over statuses needs `confirmSkip`
  * (the person was asked); the skipped statuses keep no date. Moving into fermenting or
- * conditioning claims the fermenter, checked under its row lock.
+ * conditioning claims the fermenter from the move's date on, checked under its row lock against
+ * other batches and bookings.
  */
 export async function moveBatchStatus(db: Knex, user: SessionUser, id: number, move: MoveBatchRequest): Promise<void> {
   await transactionWithRetry(db, async (trx) => {
@@ -27,9 +28,9 @@ export async function moveBatchStatus(db: Knex, user: SessionUser, id: number, m
       const names = skipped.map((s) => BATCH_STATUS_LABELS[s].toLowerCase()).join(', ');
       throw new AppError('status-skips-steps', `This move skips ${names}; confirm to record no date for ${skipped.length > 1 ? 'them' : 'it'}.`, 409);
     }
-    const holds = FERMENTER_HOLDING_STATUSES.includes(move.status);
-    if (holds && row.fermenter_kit_item_id !== null) await checkFermenter(trx, row.fermenter_kit_item_id, id, true);
     const at = move.at ? new Date(move.at) : new Date();
+    const holds = FERMENTER_HOLDING_STATUSES.includes(move.status);
+    if (holds && row.fermenter_kit_item_id !== null) await checkFermenter(trx, row.fermenter_kit_item_id, id, at);
     await batchesRepository.update(trx, id, { status: move.status, [STATUS_DATE_COLUMN[move.status]]: at });
     await recordAudit(trx, { actorUserId: user.id, action: 'batch-status-moved', subjectType: 'batch', subjectId: id, detail: { from: row.status, to: move.status, skipped, at: at.toISOString() } });
   });

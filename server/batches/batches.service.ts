@@ -58,7 +58,7 @@ export function createBatchesService(db: Knex, recipes: RecipesService) {
           predicted: version?.prediction ?? null, brew_date: new Date(`${request.brewDate}T00:00:00Z`), planned_volume_litres: request.plannedVolumeLitres,
           fermenter_kit_item_id: request.fermenterId, notes: request.notes ?? '',
         });
-        if (request.fermenterId !== null) await checkFermenter(trx, request.fermenterId, newId, false);
+        if (request.fermenterId !== null) await checkFermenter(trx, request.fermenterId, newId, null);
         await recordAudit(trx, { actorUserId: user.id, action: 'batch-created', subjectType: 'batch', subjectId: newId, detail: { recipeId: request.recipeId, recipeVersion: request.recipeVersion } });
         return newId;
       });
@@ -71,7 +71,7 @@ export function createBatchesService(db: Knex, recipes: RecipesService) {
       await transactionWithRetry(db, async (trx) => {
         const row = await batchesRepository.lock(trx, id);
         if (!row) throw batchNotFound();
-        if (changes.fermenterId) await checkFermenter(trx, changes.fermenterId, id, FERMENTER_HOLDING_STATUSES.includes(row.status));
+        if (changes.fermenterId) await checkFermenter(trx, changes.fermenterId, id, FERMENTER_HOLDING_STATUSES.includes(row.status) ? new Date() : null);
         await batchesRepository.update(trx, id, {
           ...(changes.name !== undefined ? { name: changes.name } : {}),
           ...(changes.brewerId !== undefined ? { brewer_user_id: changes.brewerId } : {}),

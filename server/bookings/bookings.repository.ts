@@ -95,6 +95,21 @@ export const bookingsRepository = {
     return row ? toBooking(row) : null;
   },
 
+  /**
+   * The first live booking of the item still held at or after `from`, other than those serving
+   * `exceptBatchId`: what a batch that starts holding the fermenter at `from` would run into.
+   */
+  async firstHeldFrom(trx: Knex.Transaction, kitItemId: number, from: Date, exceptBatchId: number): Promise<Booking | null> {
+    const row = await liveBookings(trx)
+      .where('bookings.kit_item_id', kitItemId)
+      .where('bookings.held_until', '>', from)
+      .where((q) => q.whereNull('bookings.batch_id').orWhereNot('bookings.batch_id', exceptBatchId))
+      .orderBy('bookings.starts_at')
+      .forShare()
+      .first();
+    return row ? toBooking(row) : null;
+  },
+
   async insert(trx: Knex.Transaction, booking: BookingWrite): Promise<number> {
     const [id] = await trx('bookings').insert({
       kit_item_id: booking.kitItemId,

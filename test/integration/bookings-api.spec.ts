@@ -1,6 +1,5 @@
 import { DateTime } from 'luxon';
 import { ApiClient } from './helpers/api-client';
-import { startBatch } from './helpers/batch-factory';
 import { givePaidUpDues } from './helpers/dues-factory';
 import { createKitItem, wallClockFromToday } from './helpers/kit-factory';
 import { createTestApp, TestApp } from './helpers/test-app';
@@ -196,40 +195,5 @@ describe('Bookings API', () => {
     expect(oldLink.status).toBe(404);
     expect(revoked.status).toBe(404);
     expect((await client.get('/api/bookings/feed-link')).body).toEqual({ active: false, issuedAt: null });
-  });
-});
-
-describe('Bookings API with batches', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
-
-  it('when a batch is fermenting in a fermenter, then bookings of it are refused naming the batch, except one serving that batch', async () => {
-    const zone = t.config.coopTimeZone;
-    const item = await createKitItem(t.db);
-    const brewer = await createUser(t.db);
-    const otherMember = await createUser(t.db);
-    await givePaidUpDues(t.db, brewer.id);
-    await givePaidUpDues(t.db, otherMember.id);
-    const brewerClient = await ApiClient.signedIn(t.app, brewer);
-    const other = await ApiClient.signedIn(t.app, otherMember);
-    const batch = await startBatch(brewerClient, { name: 'Porch pale', fermenterId: item.id });
-    const moved = await brewerClient.send('post', `/api/batches/${batch.id}/status`, { status: 'fermenting', confirmSkip: true });
-    expect(moved.status).toBe(200);
-    const times = { start: wallClockFromToday(zone, 3, 10), end: wallClockFromToday(zone, 4, 10) };
-
-    const refused = await other.send('post', '/api/bookings', { kitItemId: item.id, ...times });
-    const forTheBatch = await brewerClient.send('post', '/api/bookings', { kitItemId: item.id, batchId: batch.id, ...times });
-    const notMine = await other.send('post', '/api/bookings', { kitItemId: item.id, batchId: batch.id, ...times });
-
-    expect(refused.status).toBe(409);
-    expect(refused.body.error.details.conflict).toMatchObject({ kind: 'batch', id: batch.id, batchName: 'Porch pale' });
-    expect(forTheBatch.status).toBe(201);
-    expect(forTheBatch.body.batchId).toBe(batch.id);
-    expect(notMine.status).toBe(400);
-    expect(notMine.body.fields).toHaveProperty('batchId');
   });
 });
