@@ -50,6 +50,7 @@ import { createMailRouter, createMailSender, createOutboxDispatcher, createOutbo
 import { processHolderId, startScheduler } from './scheduler/scheduler';
 import { BookingNotices, bookingsRepository, createBookingFeedService, createBookingNotices, createBookingsRouter, createBookingsService } from './bookings';
 import { createKitRouter, createKitService } from './kit';
+import { createBrewPlanReads, createBrewPlanRouter, createBrewPlanWrites } from './brew-plan';
 
 export interface AppDeps {
   config: Config;
@@ -142,6 +143,8 @@ export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAU
   const duesStanding = createDuesStanding({ db, coopTimeZone: config.coopTimeZone });
   const bookings = createBookingsService({ db, coopTimeZone: config.coopTimeZone, duesStanding: duesStanding.standingOf, notices: bookingNotices });
   mountApi(app, '/api/bookings', createBookingsRouter(bookings, createBookingFeedService(db, config.publicUrl)));
+  const brewPlanWrites = createBrewPlanWrites({ db, coopTimeZone: config.coopTimeZone, recipes, bookings, notices: bookingNotices });
+  mountApi(app, '/api/brew-plan', createBrewPlanRouter(createBrewPlanReads(db, config.coopTimeZone, recipes), brewPlanWrites));
   const referenceTables = createReferenceTablesService(db);
   const toleranceClasses = createToleranceClassesService(db);
   const distillateAnalyses = createDistillateAnalysesService(db, referenceTables);

@@ -212,6 +212,14 @@ export interface BatchRow {
   updated_at: Date;
 }
 
+export interface BatchPlanRow {
+  batch_id: number;
+  fermentation_days: number;
+  conditioning_days: number;
+  created_at: Date;
+  updated_at: Date;
+}
+
 export interface BrewDayMeasurementsRow {
   batch_id: number;
   pre_boil_litres: Decimal | null;
@@ -385,6 +393,7 @@ declare module 'knex/types/tables' {
     outbox_messages: Knex.CompositeTableType<OutboxMessageRow, Pick<OutboxMessageRow, 'kind' | 'recipient' | 'subject' | 'text_body' | 'html_body'> & { dedupe_key?: string | null }, Partial<OutboxMessageRow>>;
     job_leases: JobLeaseRow;
     batches: Knex.CompositeTableType<BatchRow, Writable<Omit<BatchRow, 'predicted'>> & { predicted?: string | null }, Writable<Omit<BatchRow, 'predicted'>>>;
+    batch_plans: Knex.CompositeTableType<BatchPlanRow, Pick<BatchPlanRow, 'batch_id' | 'fermentation_days' | 'conditioning_days'>, Partial<BatchPlanRow>>;
     brew_day_measurements: Knex.CompositeTableType<BrewDayMeasurementsRow, Writable<BrewDayMeasurementsRow>, Writable<BrewDayMeasurementsRow>>;
     gravity_readings: Knex.CompositeTableType<GravityReadingRow, Writable<GravityReadingRow>, Writable<GravityReadingRow>>;
     reading_uploads: Knex.CompositeTableType<ReadingUploadRow, Writable<ReadingUploadRow>, Writable<ReadingUploadRow>>;

@@ -136,6 +136,18 @@ export const bookingsRepository = {
     });
   },
 
+  /** Puts a booking on another item and times (a planned batch moved on the brew plan). */
+  async reassign(trx: Knex.Transaction, id: number, to: { kitItemId: number; startsAt: Date; endsAt: Date; heldUntil: Date; timeZone: string }): Promise<void> {
+    await trx('bookings').where({ id }).update({
+      kit_item_id: to.kitItemId,
+      starts_at: to.startsAt,
+      ends_at: to.endsAt,
+      held_until: to.heldUntil,
+      time_zone: to.timeZone,
+      updated_at: new Date(),
+    });
+  },
+
   async cancel(db: Knex, id: number, byUserId: number): Promise<void> {
     await db('bookings').where({ id }).whereNull('cancelled_at').update({ cancelled_at: new Date(), cancelled_by_user_id: byUserId, updated_at: new Date() });
   },

@@ -6,3 +6,4 @@ export * from './zone-days';
 export * from './propose-slots';
 export * from './utilisation';
 export * from './brew-plan-api';
+export * from './batch-occupancy';
