@@ -126,7 +126,7 @@ describe('Brew plan API', () => {
     expect(refused.body.error.details.conflict.id).toBe(block.body.id);
     expect(moved.status).toBe(200);
     expect(moved.body).toMatchObject({ batchId: planned.batchId, bookingId: planned.bookingId, brewDate: later.plus({ weeks: 3 }).toISODate() });
-    expect((await t.db('batches').where({ id: planned.batchId }).first()).brew_date.toISOString().slice(0, 10)).toBe(later.plus({ weeks: 3 }).toISODate());
+    expect((await t.db('batches').where({ id: planned.batchId }).first())!.brew_date.toISOString().slice(0, 10)).toBe(later.plus({ weeks: 3 }).toISODate());
     expect(await t.db('audit_log').where({ action: 'batch-plan-moved', subject_id: planned.batchId })).toHaveLength(1);
   });
 
