@@ -6,6 +6,7 @@ import { runApiBench } from './bench/api-bench';
 import { benchChartRender } from './bench/chart-render-bench';
 import { join } from 'node:path';
 import { benchReadingsApi } from './bench/readings-api-bench';
+import { benchBookingsApi } from './bench/bookings-api-bench';
 const SAMPLES = 4096;
 // Short rounds, cases interleaved, best round kept: the machine is shared, and the best round is
 // the one least disturbed by other work.
@@ -69,7 +70,10 @@ function main(): void {
 
 main();
 // The API parts need their own MariaDB; `npm run bench -- --science` skips them. The chart part needs only Chromium.
-const apiBench = process.argv.includes('--science') ? Promise.resolve() : runApiBench().then(() => benchReadingsApi(join(__dirname, '..')));
+const root = join(__dirname, '..');
+const apiBench = process.argv.includes('--science')
+  ? Promise.resolve()
+  : runApiBench().then(() => benchReadingsApi(root)).then(() => benchBookingsApi(root));
 apiBench.then(benchChartRender).then(
   () => process.exit(0),
   (error) => {
