@@ -1,4 +1,4 @@
-import compression from 'compression';
+import { responseCompression } from './http/response-compression';
 import express, { Express } from 'express';
 import { Knex } from 'knex';
 import { randomUUID } from 'node:crypto';
@@ -102,7 +102,7 @@ export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAU
   app.disable('x-powered-by');
   app.use(requestLogger(logger));
   app.use(securityHeaders());
-  app.use(compression());
+  app.use(responseCompression());
   app.use(CATALOGUE_IMPORT_PATH, express.json({ limit: CATALOGUE_IMPORT_BODY_LIMIT }));
   app.use('/api', express.json({ limit: '100kb' }), wellFormedBody);
 

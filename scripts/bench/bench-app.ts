@@ -69,3 +69,16 @@ export async function bestOf(rounds: number, run: () => Promise<void>): Promise<
   }
   return fastest;
 }
+
+/** The fastest of `rounds` runs of each case, the cases taking turns so a busy spell on the shared machine hits them alike. */
+export async function bestOfEach(rounds: number, runs: (() => Promise<void>)[]): Promise<number[]> {
+  const fastest = runs.map(() => Infinity);
+  for (let i = 0; i < rounds; i++) {
+    for (const [k, run] of runs.entries()) {
+      const t0 = process.hrtime.bigint();
+      await run();
+      fastest[k] = Math.min(fastest[k], Number(process.hrtime.bigint() - t0) / 1e6);
+    }
+  }
+  return fastest;
+}

@@ -25,8 +25,7 @@ export function createAuthService(db: Knex, hasher: PasswordHasher) {
 
     /** The session's person, re-read on every request so role changes and deactivation apply at once. */
     async loadSessionUser(id: number): Promise<SessionUser | null> {
-      const user = await usersRepository.findById(db, id);
-      return user?.active ? toSessionUser(user) : null;
+      return usersRepository.findActiveSessionUser(db, id);
     },
 
     async recordSignIn(user: SessionUser, ip: string): Promise<void> {

@@ -1,6 +1,6 @@
 import { SessionData, Store } from 'express-session';
 import { Knex } from 'knex';
-import { sessionsRepository } from './sessions.repository';
+import { sessionsRepository, TOUCH_STEP_MS } from './sessions.repository';
 
 type Callback<T = void> = (err?: unknown, value?: T | null) => void;
 
@@ -30,6 +30,12 @@ export class DatabaseSessionStore extends Store {
   }
 
   override touch(sid: string, sess: SessionData, callback?: Callback): void {
+    const expiry = expiryOf(sess);
+    // Read with this request and less than a step behind: nothing to write, and no round trip.
+    if (sess.storedExpiryMs !== undefined && expiry.getTime() - sess.storedExpiryMs < TOUCH_STEP_MS) {
+      callback?.();
+      return;
+    }
     sessionsRepository.touch(this.db, sid, expiryOf(sess)).then(() => callback?.(), (err) => callback?.(err));
   }
 

@@ -2,6 +2,8 @@ import { SessionUser } from '@shared/auth';
 
 declare module 'express-session' {
   interface SessionData {
+    /** The expiry as stored when the session was read (epoch ms), so a touch that would barely move it writes nothing. */
+    storedExpiryMs?: number;
     csrfToken?: string;
   }
 }

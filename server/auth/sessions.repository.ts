@@ -1,20 +1,29 @@
 import { Knex } from 'knex';
 import { SessionData } from 'express-session';
 
+/** How far an expiry must move before a touch writes it. */
+export const TOUCH_STEP_MS = 60_000;
+
 /** Data access for stored sessions (sid, JSON body, expiry). */
 export const sessionsRepository = {
   async find(db: Knex, sid: string, now: Date): Promise<SessionData | null> {
-    const row = await db('sessions').where({ sid }).where('expired', '>', now).first('sess');
+    const row = await db('sessions').where({ sid }).where('expired', '>', now).first('sess', 'expired');
     if (!row) return null;
-    return (typeof row.sess === 'string' ? JSON.parse(row.sess) : row.sess) as SessionData;
+    const sess = (typeof row.sess === 'string' ? JSON.parse(row.sess) : row.sess) as SessionData;
+    return { ...sess, storedExpiryMs: row.expired.getTime() };
   },
 
   async save(db: Knex, sid: string, sess: SessionData, expires: Date): Promise<void> {
-    await db('sessions').insert({ sid, sess: JSON.stringify(sess), expired: expires }).onConflict('sid').merge(['sess', 'expired']);
+    const { storedExpiryMs: _read, ...kept } = sess;
+    await db('sessions').insert({ sid, sess: JSON.stringify(kept), expired: expires }).onConflict('sid').merge(['sess', 'expired']);
   },
 
+  /**
+   * Moves the expiry forward only when it moved by more than TOUCH_STEP_MS: a rolling session is
+   * touched on every request, and rewriting the row each time costs a write per read.
+   */
   async touch(db: Knex, sid: string, expires: Date): Promise<void> {
-    await db('sessions').where({ sid }).update({ expired: expires });
+    await db('sessions').where({ sid }).where('expired', '<', new Date(expires.getTime() - TOUCH_STEP_MS)).update({ expired: expires });
   },
 
   async remove(db: Knex, sid: string): Promise<void> {

@@ -37,6 +37,10 @@ export const batchesRepository = {
     return row ? toRecord(row) : null;
   },
 
+  async exists(db: Knex, id: number): Promise<boolean> {
+    return Boolean(await db('batches').where({ id }).first('id'));
+  },
+
   /** Newest brew first; optionally one brewer's and only some statuses. */
   async list(db: Knex, filter: { brewerId?: number; statuses?: readonly BatchStatus[] }): Promise<BatchRecord[]> {
     const query = withNames(db).orderBy('batches.brew_date', 'desc').orderBy('batches.id', 'desc');

@@ -1,6 +1,7 @@
 import { Knex } from 'knex';
 import { GravityReading, ReadingSortColumn } from '@shared/readings';
 import { GravityReadingRow, ReadingUploadRow } from '../db';
+import { PageReadingRow, ReadingSourceNames } from './reading-page-columns';
 
 /** A reading row with the names of who or what it came from. */
 export interface ReadingRecord extends GravityReadingRow {
@@ -21,6 +22,31 @@ function withSources(db: Knex) {
     .leftJoin('reading_uploads', 'reading_uploads.id', 'gravity_readings.upload_id')
     .leftJoin('batch_push_tokens', 'batch_push_tokens.id', 'gravity_readings.push_token_id')
     .select('gravity_readings.*', 'users.name as created_by_name', 'reading_uploads.file_name as upload_file_name', 'batch_push_tokens.label as push_token_label');
+}
+
+/** DATETIME columns as whole seconds since 1970 (no time zone applies to DATETIME), cheaper to read than dates. */
+const epochSeconds = (db: Knex, column: string) => db.raw("TIMESTAMPDIFF(SECOND, '1970-01-01', ??) as ??", [column, `${column}_s`]);
+
+const pageColumns = (db: Knex) => [
+  'id', epochSeconds(db, 'measured_at'), 'instrument', 'raw_value', 'raw_unit', 'sample_temperature_c', 'calibration_temperature_c', 'correction_factor',
+  'original_brix', 'corrected_sg', 'source', 'upload_id', 'push_token_id', 'note', 'created_by_user_id', epochSeconds(db, 'updated_at'),
+];
+
+const distinct = (values: (number | null)[]) => [...new Set(values.filter((v): v is number => v !== null))];
+
+async function namesById(db: Knex, table: 'users' | 'reading_uploads' | 'batch_push_tokens', column: string, ids: number[]): Promise<Map<number, string>> {
+  if (!ids.length) return new Map();
+  const rows: { id: number; name: string }[] = await db(table).whereIn('id', ids).select('id', `${column} as name`);
+  return new Map(rows.map((r) => [r.id, r.name]));
+}
+
+async function sourceNames(db: Knex, rows: readonly PageReadingRow[]): Promise<ReadingSourceNames> {
+  const [users, uploads, tokens] = await Promise.all([
+    namesById(db, 'users', 'name', distinct(rows.map((r) => r.created_by_user_id))),
+    namesById(db, 'reading_uploads', 'file_name', distinct(rows.map((r) => r.upload_id))),
+    namesById(db, 'batch_push_tokens', 'label', distinct(rows.map((r) => r.push_token_id))),
+  ]);
+  return { users, uploads, tokens };
 }
 
 /** The reading as the API sends it. */
@@ -47,14 +73,18 @@ export function toReading(r: ReadingRecord): GravityReading {
 
 /** Data access for the gravity log. */
 export const readingsRepository = {
+  /** One page of the log: the count and the rows side by side, then the names of the few sources they share. */
   async page(db: Knex, batchId: number, page: { offset: number; limit: number; sort: ReadingSortColumn; direction: 'asc' | 'desc' }) {
-    const [{ total }] = await db('gravity_readings').where({ batch_id: batchId }).count<{ total: number }[]>({ total: '*' });
-    const rows: ReadingRecord[] = await withSources(db)
-      .where('gravity_readings.batch_id', batchId)
-      .orderBy([{ column: `gravity_readings.${SORT_COLUMN[page.sort]}`, order: page.direction }, { column: 'gravity_readings.id', order: page.direction }])
-      .offset(page.offset)
-      .limit(page.limit);
-    return { total: Number(total), rows };
+    const [[{ total }], rows] = await Promise.all([
+      db('gravity_readings').where({ batch_id: batchId }).count<{ total: number }[]>({ total: '*' }),
+      db('gravity_readings')
+        .where({ batch_id: batchId })
+        .orderBy([{ column: SORT_COLUMN[page.sort], order: page.direction }, { column: 'id', order: page.direction }])
+        .offset(page.offset)
+        .limit(page.limit)
+        .select<PageReadingRow[]>(pageColumns(db)),
+    ]);
+    return { total: Number(total), rows, names: await sourceNames(db, rows) };
   },
 
   async findById(db: Knex, id: number): Promise<ReadingRecord | null> {

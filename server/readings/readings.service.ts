@@ -9,6 +9,7 @@ import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { createCorrector } from './reading-correction';
 import { newReadingRow, toStoredInstant } from './reading-rows';
 import { ReadingRecord, readingsRepository, toReading } from './readings.repository';
+import { toReadingColumns } from './reading-page-columns';
 
 /** What a reading's edit may change: its temperatures and note. The value as read stays as it was read. */
 export type ReadingChanges = Partial<Pick<ReadingInput, 'sampleTemperatureC' | 'calibrationTemperatureC' | 'note'>>;
@@ -34,9 +35,10 @@ export function createReadingsService(db: Knex) {
     batch,
 
     async page(batchId: number, page: { offset: number; limit: number; sort: ReadingSortColumn; direction: 'asc' | 'desc' }): Promise<ReadingPage> {
-      await batch(batchId);
-      const { total, rows } = await readingsRepository.page(db, batchId, page);
-      return { total, offset: page.offset, items: rows.map(toReading) };
+      // Asked side by side: a batch that does not exist simply has no rows to page.
+      const [exists, { total, rows, names }] = await Promise.all([batchesRepository.exists(db, batchId), readingsRepository.page(db, batchId, page)]);
+      if (!exists) throw batchNotFound();
+      return { batchId, total, offset: page.offset, columns: toReadingColumns(rows, names) };
     },
 
     async add(user: SessionUser, batchId: number, input: ReadingInput): Promise<GravityReading> {

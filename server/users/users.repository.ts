@@ -43,6 +43,19 @@ export const usersRepository = {
     return row ? toRecord(row, (await rolesByUser(db, [id])).get(id) ?? []) : null;
   },
 
+  /** An active person with their roles in one query: read on every signed-in request. */
+  async findActiveSessionUser(db: Knex, id: number): Promise<{ id: number; email: string; name: string; roles: Role[] } | null> {
+    const row = await db('users')
+      .leftJoin('user_roles', 'user_roles.user_id', 'users.id')
+      .where('users.id', id)
+      .where('users.active', true)
+      .groupBy('users.id', 'users.email', 'users.name')
+      .first('users.id', 'users.email', 'users.name', db.raw("GROUP_CONCAT(user_roles.role SEPARATOR ',') as roles"));
+    if (!row) return null;
+    const roles = row.roles ? (String(row.roles).split(',') as Role[]) : [];
+    return { id: row.id, email: row.email, name: row.name, roles: sortRoles(roles) };
+  },
+
   /** The user and their password hash, for checking a sign-in. */
   async findCredentials(db: Knex, email: string): Promise<{ user: UserRecord; passwordHash: string } | null> {
     const row = await db('users').where({ email: email.toLowerCase() }).first();

@@ -5,3 +5,4 @@ export * from './corrected-gravity';
 export * from './fermentation-flags';
 export * from './fermentation-progress';
 export * from './readings-api';
+export * from './reading-columns';

@@ -1,4 +1,5 @@
-import { GravityReading, GravityUnit, Instrument, ReadingInput } from './gravity-reading';
+import { GravityUnit, Instrument, ReadingInput } from './gravity-reading';
+import { ReadingColumns } from './reading-columns';
 
 export const READINGS_PATH = '/api/readings';
 export const READINGS_PUSH_PATH = '/api/readings/push';
@@ -10,11 +11,12 @@ export type ReadingSortColumn = (typeof READING_SORT_COLUMNS)[number];
 /** What an edit of a reading may change: temperatures and note; the value as read stays as read. */
 export type ReadingChangesRequest = Partial<Pick<ReadingInput, 'sampleTemperatureC' | 'calibrationTemperatureC' | 'note'>>;
 
-/** One page of a batch's readings. */
+/** One page of a batch's readings, column by column (`readingsFromColumns` gives the rows). */
 export interface ReadingPage {
+  batchId: number;
   total: number;
   offset: number;
-  items: GravityReading[];
+  columns: ReadingColumns;
 }
 
 /** How an upload treats bad rows: refuse the whole file, or import the good rows and report the rest. */

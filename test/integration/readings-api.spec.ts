@@ -1,4 +1,4 @@
-import { correctedGravity, RawGravity } from '@shared/readings';
+import { correctedGravity, GravityReading, RawGravity, ReadingPage, readingsFromColumns } from '@shared/readings';
 import { ApiClient } from './helpers/api-client';
 import { readingBody, startBatch } from './helpers/batch-factory';
 import { createTestApp, TestApp } from './helpers/test-app';
@@ -107,11 +107,15 @@ describe('Readings API', () => {
 
   it('when paging and sorting, then the page holds the asked rows and the total', async () => {
     const { client, batch } = await ownBatch();
+    const added: GravityReading[] = [];
     for (let i = 0; i < 5; i++) {
-      await client.send('post', `/api/batches/${batch.id}/readings`, readingBody({ measuredAt: `2026-11-2${i}T08:00:00Z`, rawValue: 1.05 - i * 0.005 }));
+      added.push((await client.send('post', `/api/batches/${batch.id}/readings`, readingBody({ measuredAt: `2026-11-2${i}T08:00:00Z`, rawValue: 1.05 - i * 0.005 }))).body);
     }
-    const page = (await client.get(`/api/batches/${batch.id}/readings?offset=1&limit=2&sort=correctedSg&direction=asc`)).body;
+    const page: ReadingPage = (await client.get(`/api/batches/${batch.id}/readings?offset=1&limit=2&sort=correctedSg&direction=asc`)).body;
     expect(page.total).toBe(5);
-    expect(page.items.map((r: { rawValue: number }) => r.rawValue)).toEqual([1.035, 1.04]);
+    const rows = readingsFromColumns(page.batchId, page.columns);
+    expect(rows.map((r) => r.rawValue)).toEqual([1.035, 1.04]);
+    // The columns carry every field of each reading as the single-reading routes send it.
+    expect(rows).toEqual([added[3], added[2]]);
   });
 });

@@ -1,3 +1,4 @@
+import { ReadingPage } from '@shared/readings';
 import { ApiClient } from './helpers/api-client';
 import { startBatch } from './helpers/batch-factory';
 import { createTestApp, TestApp } from './helpers/test-app';
@@ -65,8 +66,8 @@ describe('Readings import and export API', () => {
     expect(again.body.imported).toBe(0);
     expect(again.body.duplicates.map((d: { line: number }) => d.line)).toEqual([2, 4, 6, 7]);
     expect(await stored(batch.id)).toHaveLength(4);
-    const list = (await client.get(`/api/batches/${batch.id}/readings?limit=10`)).body;
-    expect(list.items[0].sourceDetail).toBe('log.csv');
+    const list: ReadingPage = (await client.get(`/api/batches/${batch.id}/readings?limit=10`)).body;
+    expect(list.columns.sourceDetail[0]).toBe('log.csv');
   });
 
   it('when the file repeats a time and instrument, then the repeat is reported as a duplicate of its first line', async () => {

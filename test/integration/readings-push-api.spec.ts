@@ -1,4 +1,5 @@
 import request from 'supertest';
+import { readingsFromColumns } from '@shared/readings';
 import { ApiClient } from './helpers/api-client';
 import { startBatch } from './helpers/batch-factory';
 import { createTestApp, TestApp } from './helpers/test-app';
@@ -33,7 +34,7 @@ describe('Logger push API', () => {
     expect(retry.body).toEqual({ stored: 0, alreadyPresent: 2 });
     const page = (await client.get(`/api/batches/${batch.id}/readings`)).body;
     expect(page.total).toBe(2);
-    expect(page.items[0]).toMatchObject({ source: 'push', sourceDetail: 'Fermenter float', instrument: 'logger' });
+    expect(readingsFromColumns(page.batchId, page.columns)[0]).toMatchObject({ source: 'push', sourceDetail: 'Fermenter float', instrument: 'logger' });
     const tokens = (await client.get(`/api/batches/${batch.id}/push-tokens`)).body;
     expect(tokens[0]).not.toHaveProperty('token');
     expect(tokens[0].lastUsedAt).not.toBeNull();

@@ -2,9 +2,9 @@ import { HttpClient, HttpEvent } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { BATCHES_PATH } from '@shared/batches';
 import {
-  GravityReading, ImportMode, IssuedPushToken, PushTokenSummary, ReadingChangesRequest, ReadingColumnMapping, ReadingImportResult, ReadingInput, ReadingPage, READINGS_PATH, ReadingSortColumn,
+  GravityReading, ImportMode, IssuedPushToken, PushTokenSummary, ReadingChangesRequest, ReadingColumnMapping, ReadingImportResult, ReadingInput, ReadingPage, READINGS_PATH, readingsFromColumns, ReadingSortColumn,
 } from '@shared/readings';
-import { Observable } from 'rxjs';
+import { map, Observable } from 'rxjs';
 
 /** What the readings table asks for. */
 export interface ReadingPageRequest {
@@ -14,13 +14,23 @@ export interface ReadingPageRequest {
   direction: 'asc' | 'desc';
 }
 
+/** A page of readings as the table shows them. */
+export interface LoadedReadingPage {
+  total: number;
+  offset: number;
+  items: GravityReading[];
+}
+
 /** Typed calls to the gravity log routes. */
 @Injectable({ providedIn: 'root' })
 export class ReadingsClient {
   private readonly http = inject(HttpClient);
 
-  page(batchId: number, request: ReadingPageRequest): Observable<ReadingPage> {
-    return this.http.get<ReadingPage>(`${BATCHES_PATH}/${batchId}/readings`, { params: { ...request } });
+  /** A page of the log; the server sends it column by column, the table reads one object per reading. */
+  page(batchId: number, request: ReadingPageRequest): Observable<LoadedReadingPage> {
+    return this.http
+      .get<ReadingPage>(`${BATCHES_PATH}/${batchId}/readings`, { params: { ...request } })
+      .pipe(map((page) => ({ total: page.total, offset: page.offset, items: readingsFromColumns(page.batchId, page.columns) })));
   }
 
   add(batchId: number, input: ReadingInput): Observable<GravityReading> {

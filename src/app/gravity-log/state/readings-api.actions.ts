@@ -1,13 +1,14 @@
 import { createActionGroup, props } from '@ngrx/store';
 import { Batch } from '@shared/batches';
-import { GravityReading, IssuedPushToken, PushTokenSummary, ReadingImportResult, ReadingPage } from '@shared/readings';
+import { GravityReading, IssuedPushToken, PushTokenSummary, ReadingImportResult } from '@shared/readings';
+import { LoadedReadingPage } from '../readings-client';
 
 export const ReadingsApiActions = createActionGroup({
   source: 'Readings API',
   events: {
     'Batch Loaded Success': props<{ batch: Batch }>(),
     'Batch Loaded Failure': props<{ message: string }>(),
-    'Readings Loaded Success': props<{ page: ReadingPage }>(),
+    'Readings Loaded Success': props<{ page: LoadedReadingPage }>(),
     'Readings Loaded Failure': props<{ message: string }>(),
     'Reading Added Success': props<{ reading: GravityReading }>(),
     'Reading Added Failure': props<{ message: string; fields: Record<string, string> | null }>(),
