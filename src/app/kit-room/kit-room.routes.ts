@@ -8,12 +8,7 @@ import * as kitRegisterEffects from './state/kit-register.effects';
 import * as kitRoomFeedbackEffects from './state/kit-room-feedback.effects';
 import * as kitRoomEffects from './state/kit-room.effects';
 import { kitRoomFeature } from './state/kit-room.feature';
-
-/** Dates typed as yyyy-MM-dd (unambiguous in any locale) and shown with the weekday. */
-const KIT_ROOM_DATE_FORMATS = {
-  parse: { dateInput: ['yyyy-MM-dd', 'd/M/yyyy', 'D'] },
-  display: { dateInput: 'yyyy-MM-dd', monthYearLabel: 'LLL yyyy', dateA11yLabel: 'DDD', monthYearA11yLabel: 'LLLL yyyy' },
-};
+import { KIT_ROOM_DATE_FORMATS } from './kit-room-date-formats';
 
 export const kitRoomRoutes: Routes = [
   {

@@ -30,6 +30,23 @@ export const kitRoomPage = {
     return (await cell.locator('.hold').allTextContents()).map((text) => text.trim());
   },
 
+  /** Opens a hold of the calendar (admins): the panel to move or cancel its booking. */
+  async openHold(page: Page, day: string, label: string): Promise<void> {
+    await page.locator(`[data-day="${day}"]`).getByRole('button', { name: label }).click();
+    await page.getByRole('form', { name: 'Move booking' }).waitFor();
+  },
+
+  /** Moves the opened booking: the start day typed, the end day picked in the date picker's calendar. */
+  async moveOpened(page: Page, start: { date: string; time: string }, end: { pickDayLabel: string; time: string }): Promise<void> {
+    const form = page.getByRole('form', { name: 'Move booking' });
+    await form.getByLabel('Start date').fill(start.date);
+    await form.getByLabel('Start time').fill(start.time);
+    await form.getByRole('button', { name: 'Open calendar' }).nth(1).click();
+    await page.getByRole('dialog').getByRole('button', { name: end.pickDayLabel }).click();
+    await form.getByLabel('End time').fill(end.time);
+    await form.getByRole('button', { name: 'Move booking' }).click();
+  },
+
   myBookings(page: Page) {
     return page.getByRole('list', { name: 'My bookings' });
   },

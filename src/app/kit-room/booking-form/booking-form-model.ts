@@ -14,3 +14,9 @@ export function endAfterStart(group: AbstractControl): ValidationErrors | null {
   const end = wallClockOf(value.endDate, value.endTime);
   return start && end && end <= start ? { endBeforeStart: true } : null;
 }
+
+/** Wall-clock text (yyyy-MM-ddTHH:mm) split into the day the date picker shows and the typed time. */
+export function wallClockParts(local: string): { date: DateTime | null; time: string } {
+  const date = DateTime.fromISO(local.slice(0, 10));
+  return { date: date.isValid ? date : null, time: local.slice(11, 16) };
+}

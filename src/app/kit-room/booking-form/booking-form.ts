@@ -2,8 +2,7 @@ import { ChangeDetectionStrategy, Component, effect, inject, input, output } fro
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
-import { MatDatepicker, MatDatepickerInput, MatDatepickerToggle } from '@angular/material/datepicker';
-import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { DateTime } from 'luxon';
@@ -11,12 +10,13 @@ import { BOOKING_LIMITS, CreateBookingRequest } from '@shared/bookings';
 import { KitItemSummary } from '@shared/kit';
 import { FieldErrors } from '@app/ui/server-field-errors';
 import { NamedChoice } from '../named-choice';
+import { WallClockFields } from '../wall-clock-fields/wall-clock-fields';
 import { endAfterStart, wallClockOf } from './booking-form-model';
 
 /** Item, start and end (wall-clock, co-op zone) and a note; admins may block the item for maintenance instead. */
 @Component({
   selector: 'cw-booking-form',
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatDatepicker, MatDatepickerInput, MatDatepickerToggle, MatCheckbox, MatButton],
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, WallClockFields],
   templateUrl: './booking-form.html',
   styleUrl: './booking-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
