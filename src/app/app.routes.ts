@@ -23,6 +23,7 @@ export const routes: Routes = [
       { path: 'batches', title: 'Batches · Commonwort', loadChildren: () => import('./batches/batches.routes').then((m) => m.batchesRoutes) },
       { path: 'gravity-log', title: 'Gravity log · Commonwort', loadChildren: () => import('./gravity-log/gravity-log.routes').then((m) => m.gravityLogRoutes) },
       { path: 'kit-room', title: 'Kit room · Commonwort', loadChildren: () => import('./kit-room/kit-room.routes').then((m) => m.kitRoomRoutes) },
+      { path: 'brew-plan', title: 'Brew plan · Commonwort', loadChildren: () => import('./brew-plan/brew-plan.routes').then((m) => m.brewPlanRoutes) },
       {
         path: 'strength-check',
         title: 'Strength check · Commonwort',

@@ -22,7 +22,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Strength check', path: '/strength-check', icon: 'percent', available: true, roles: null, summary: 'Strength converter, blending planner and tolerances.' },
   { label: 'Reference tables', path: '/reference-tables', icon: 'table_chart', available: true, roles: null, summary: 'Density tables: the built-in equation and uploaded tables, audited.' },
   { label: 'Kit room', path: '/kit-room', icon: 'kitchen', available: true, roles: null, summary: 'The shared kit and its bookings.' },
-  { label: 'Brew plan', path: '/brew-plan', icon: 'calendar_month', available: false, roles: null, summary: 'The production calendar.' },
+  { label: 'Brew plan', path: '/brew-plan', icon: 'calendar_month', available: true, roles: null, summary: 'The production calendar: batches on the fermenters, and planning the next.' },
   { label: 'Dues', path: '/dues', icon: 'payments', available: true, roles: null, summary: 'Your dues: pay by card, keep a card for renewal, see your receipts.' },
   {
     label: 'Members',

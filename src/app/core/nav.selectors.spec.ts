@@ -10,13 +10,13 @@ describe('selectVisibleNavItems', () => {
   it('shows a member only the built areas open to everyone', () => {
     const labels = selectVisibleNavItems(stateFor(person(['member']))).map((item) => item.label);
 
-    expect(labels).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Dues']);
+    expect(labels).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Brew plan', 'Dues']);
   });
 
   it('adds Members and Outbox for an admin', () => {
     const labels = selectVisibleNavItems(stateFor(person(['member', 'admin']))).map((item) => item.label);
 
-    expect(labels).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Dues', 'Members', 'Outbox']);
+    expect(labels).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Brew plan', 'Dues', 'Members', 'Outbox']);
   });
 
   it('keeps every area of the brief in the config, in order', () => {

@@ -45,7 +45,7 @@ describe('TodayPage', () => {
     const element = await render(['member']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/dues']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/brew-plan', '/dues']);
   });
 
   it('lists my active batches with latest gravity, attenuation and the finished flag', async () => {
@@ -63,6 +63,6 @@ describe('TodayPage', () => {
     const element = await render(['member', 'admin']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/dues', '/members', '/outbox']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/brew-plan', '/dues', '/members', '/outbox']);
   });
 });
