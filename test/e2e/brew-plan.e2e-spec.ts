@@ -1,0 +1,65 @@
+import { randomUUID } from 'node:crypto';
+import { DateTime } from 'luxon';
+import { loadConfig } from '@server/config';
+import { ApiClient } from '../integration/helpers/api-client';
+import { createAleRecipe, createSizedFermenter } from '../integration/helpers/brew-plan-factory';
+import { givePaidUpDues } from '../integration/helpers/dues-factory';
+import { createUser } from '../integration/helpers/user-factory';
+import { newPage, seriousA11yViolations } from './helpers/browser';
+import { brewPlanPage } from './helpers/brew-plan-pages';
+import { useE2eEnvironment } from './helpers/e2e-environment';
+import { kitRoomPage } from './helpers/kit-room-pages';
+import { signInPage } from './helpers/pages';
+import { dismissSnackBar } from './helpers/recipes-pages';
+
+describe('Brew plan in the browser', () => {
+  const env = useE2eEnvironment();
+
+  it('when a brewer plans a batch and accepts the proposed slot, then it shows on the timeline and in the kit room calendar', async () => {
+    const db = env.server.db;
+    const brewer = await createUser(db, ['member', 'brewer'], { name: 'Ines Planwell' });
+    await givePaidUpDues(db, brewer.id);
+    // Only this fermenter holds 1900 L, so the earliest proposal is on it.
+    const fermenter = await createSizedFermenter(db, 1900);
+    const recipe = await createAleRecipe(db, await ApiClient.signedIn(env.server.baseUrl, brewer));
+    const recipeName = (await db('recipes').where({ id: recipe.id }).first())!.name;
+    const zone = loadConfig().coopTimeZone;
+    const nextMonday = DateTime.now().setZone(zone).startOf('week').plus({ weeks: 1 }).toISODate()!;
+    const batchName = `Hedgerow pale ${randomUUID().slice(0, 4)}`;
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
+    await signInPage.signIn(page, brewer.email, brewer.password);
+    await page.waitForURL(/\/today/);
+
+    await brewPlanPage.open(page);
+    await brewPlanPage.askForSlots(page, { name: batchName, recipe: recipeName, volumeLitres: 1900, wantedWeek: nextMonday });
+    const accept = brewPlanPage.proposals(page).getByRole('button', { name: `Accept ${fermenter.code} from ${nextMonday}` });
+    await accept.click();
+    await page.getByText(`Planned on ${fermenter.code}`).waitFor();
+
+    const lane = brewPlanPage.lane(page, fermenter.code);
+    await lane.getByRole('article', { name: `${batchName}, Planned` }).waitFor();
+    expect(await lane.textContent()).toContain(`Mon ${DateTime.fromISO(nextMonday).toFormat('d LLL', { locale: 'en-GB' })} 08:00`);
+    await dismissSnackBar(page);
+    expect(await seriousA11yViolations(page)).toEqual([]);
+
+    await kitRoomPage.open(page);
+    await kitRoomPage.showLaterPeriod(page);
+    expect(await kitRoomPage.holdsOn(page, nextMonday)).toContain(`${fermenter.code} · Ines Planwell · from 08:00`);
+    await context.close();
+  }, 120_000);
+
+  it('when a member opens the plan on a 375 px screen, then every fermenter is listed without sideways scrolling and nothing can be planned', async () => {
+    const member = await createUser(env.server.db, ['member']);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl, { width: 375, height: 800 });
+    await signInPage.signIn(page, member.email, member.password);
+    await page.waitForURL(/\/today/);
+
+    await brewPlanPage.open(page);
+    await page.locator('cw-fermenter-lane').first().waitFor();
+
+    expect(await page.getByRole('form', { name: 'Plan a batch' }).count()).toBe(0);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
+    expect(await seriousA11yViolations(page)).toEqual([]);
+    await context.close();
+  }, 90_000);
+});
