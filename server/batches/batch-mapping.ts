@@ -1,4 +1,5 @@
 import { Batch, BATCH_STATUSES, BatchStatus, BatchStatusDates, BatchSummary, BrewDayMeasurements } from '@shared/batches';
+import { forecastFromReadings, forecastOutlook } from '@shared/fermentation';
 import { fermentationProgress, GravityPoint } from '@shared/readings';
 import { BatchRecord } from './batches.repository';
 
@@ -48,6 +49,7 @@ export function dateOnly(value: Date): string {
 }
 
 export function toBatchSummary(record: BatchRecord, points: readonly GravityPoint[]): BatchSummary {
+  const og = effectiveOg(record, points);
   return {
     id: record.id,
     name: record.name,
@@ -60,7 +62,8 @@ export function toBatchSummary(record: BatchRecord, points: readonly GravityPoin
     fermenterCode: record.fermenter_code,
     recipeId: record.recipe_id,
     recipeVersion: record.recipe_version,
-    progress: fermentationProgress(points, effectiveOg(record, points), record.predicted?.yeastAttenuationPercent ?? null),
+    progress: fermentationProgress(points, og, record.predicted?.yeastAttenuationPercent ?? null),
+    forecast: record.status === 'fermenting' ? forecastOutlook(forecastFromReadings(points.map((p) => ({ time: p.at, gravity: p.sg })), og)) : null,
   };
 }
 

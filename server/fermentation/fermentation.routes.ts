@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { Knex } from 'knex';
-import { FermentationChartData, forecastFermentation } from '@shared/fermentation';
+import { FermentationChartData, forecastFromReadings } from '@shared/fermentation';
 import { abvSoFar, attenuationSoFar } from '@shared/readings';
 import { signedIn } from '../auth/route-access';
 import { batchNotFound } from '../batches/batch-access';
@@ -15,13 +15,12 @@ export async function fermentationChart(db: Knex, batchId: number): Promise<Ferm
   if (!batch) throw batchNotFound();
   const readings = await fermentationRepository.readings(db, batchId);
   const og = effectiveOg(batch, readings.map((r) => ({ at: r.at, sg: r.sg, instrument: 'hydrometer' as const })));
-  const start = og === null ? readings : readings.filter((r) => r.sg <= og);
   const latest = readings.length ? readings[readings.length - 1].sg : null;
   return {
     batchId, batchName: batch.name, og, readings,
     apparentAttenuationPercent: attenuationSoFar(og, latest),
     abvSoFar: abvSoFar(og, latest),
-    forecast: forecastFermentation(start.map((r) => ({ time: r.at, gravity: r.sg }))),
+    forecast: forecastFromReadings(readings.map((r) => ({ time: r.at, gravity: r.sg })), og),
   };
 }
 

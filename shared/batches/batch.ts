@@ -1,3 +1,4 @@
+import type { ForecastOutlook } from '../fermentation/forecast-outlook';
 import { BatchStatus } from './batch-status';
 
 /** What the recipe version predicted, copied into the batch when it was started. */
@@ -51,6 +52,8 @@ export interface BatchSummary {
   recipeId: number | null;
   recipeVersion: number | null;
   progress: BatchProgress;
+  /** Fermenting batches: the final gravity and finish day forecast from the log; null in other statuses. */
+  forecast: ForecastOutlook | null;
 }
 
 /** One batch with everything its page shows. */

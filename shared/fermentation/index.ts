@@ -10,3 +10,5 @@ export * from './fermentation-chart-api';
 export { binReadings } from './reading-bins';
 /** A small Levenberg–Marquardt fit with the covariance of its estimate. */
 export { levenbergMarquardt } from './levenberg-marquardt';
+export { forecastFromReadings, forecastOutlook } from './forecast-outlook';
+export type { ForecastOutlook } from './forecast-outlook';

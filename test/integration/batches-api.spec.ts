@@ -119,4 +119,28 @@ describe('Batches API', () => {
     expect(mine.map((b: { id: number }) => b.id)).toEqual([active.id]);
     expect(mine[0].progress).toMatchObject({ latestSg: 1.03, readingCount: 1, finished: false, stuck: false });
   });
+
+  it("when my fermenting batch has a log, then Today's list carries the same forecast as its chart, and other statuses none", async () => {
+    const { client } = await signedIn();
+    const batch = await startBatch(client, { name: 'Forecast' });
+    await client.send('post', `/api/batches/${batch.id}/status`, { status: 'fermenting', confirmSkip: true, at: '2026-11-20T18:00:00Z' });
+    // A logistic fall of apparent extract, 12 → 2.4 °P (the model of fermentation-forecast.ts; figures invented for the test).
+    for (let d = 0; d <= 5; d += 0.5) {
+      const plato = 2.4 + 9.6 / (1 + Math.exp(1.6 * (d - 2.5)));
+      const at = new Date(Date.UTC(2026, 10, 21, 8) + d * 86_400_000).toISOString();
+      await client.send('post', `/api/batches/${batch.id}/readings`, { measuredAt: at, instrument: 'density-meter', rawValue: Number(plato.toFixed(2)), rawUnit: 'plato', sampleTemperatureC: null, calibrationTemperatureC: null });
+    }
+    const [listed] = (await client.get('/api/batches?mine=true')).body.filter((b: { id: number }) => b.id === batch.id);
+    const chart = (await client.get(`/api/batches/${batch.id}/fermentation`)).body;
+    expect(chart.forecast.status).toBe('forecast');
+    expect(listed.forecast).toEqual({
+      status: 'forecast', finalGravity: chart.forecast.finalGravity, finalGravityLow: chart.forecast.finalGravityLow, finalGravityHigh: chart.forecast.finalGravityHigh,
+      finishTime: chart.forecast.finishTime, finishTimeEarly: chart.forecast.finishTimeEarly, finishTimeLate: chart.forecast.finishTimeLate,
+    });
+    // 2.4 °P is SG 1.0094 (ASBC Tables, Extract in Wort, from memory: 2.5 °P ≈ 1.0098).
+    expect(listed.forecast.finalGravity).toBeCloseTo(1.0094, 3);
+    const planned = await startBatch(client, { name: 'Planned' });
+    const [plannedListed] = (await client.get('/api/batches?mine=true')).body.filter((b: { id: number }) => b.id === planned.id);
+    expect(plannedListed.forecast).toBeNull();
+  });
 });

@@ -12,6 +12,10 @@ const fermenting: BatchSummary = {
   id: 7, name: 'Test pale', status: 'fermenting', brewerId: 1, brewerName: 'Priya Raman', brewDate: '2026-11-28', plannedVolumeLitres: 20,
   fermenterId: 1, fermenterCode: 'F1', recipeId: null, recipeVersion: null,
   progress: { latestSg: 1.0123, latestAt: '2026-12-01T10:00:00Z', readingCount: 12, apparentAttenuationPercent: 76.4, abvSoFar: 5.1, finished: true, stuck: false },
+  forecast: {
+    status: 'forecast', finalGravity: 1.0118, finalGravityLow: 1.0112, finalGravityHigh: 1.0127,
+    finishTime: Date.UTC(2026, 11, 2, 23, 30), finishTimeEarly: Date.UTC(2026, 11, 2, 6), finishTimeLate: Date.UTC(2026, 11, 3, 12),
+  },
 };
 
 describe('TodayPage', () => {
@@ -22,7 +26,7 @@ describe('TodayPage', () => {
         provideRouter([]),
         provideMockStore({
           initialState: {
-            auth: { ...initialAuthState, sessionLoaded: true, user: generateMockSessionUser(roles) },
+            auth: { ...initialAuthState, sessionLoaded: true, user: generateMockSessionUser(roles), coopTimeZone: 'Europe/Berlin' },
             batches: { ...initialBatchesState, mine: true, ids: batches.map((b) => b.id), entities: Object.fromEntries(batches.map((b) => [b.id, b])) },
           },
         }),
@@ -48,7 +52,7 @@ describe('TodayPage', () => {
     expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/brew-plan', '/dues']);
   });
 
-  it('lists my active batches with latest gravity, attenuation and the finished flag', async () => {
+  it('lists my active batches with latest gravity, attenuation, the finished flag and the forecast', async () => {
     const element = await render(['member'], [fermenting]);
 
     const row = element.querySelector('cw-my-batches li')!;
@@ -57,6 +61,8 @@ describe('TodayPage', () => {
     expect(row.textContent).toContain('SG 1.012');
     expect(row.textContent).toContain('76 % attenuated');
     expect(row.textContent).toContain('Looks finished');
+    // The finish at 23:30 UTC on 2 Dec falls on 3 Dec in the co-op's zone.
+    expect(row.querySelector('[data-testid="today-forecast"]')?.textContent).toBe('Forecast FG 1.012 (1.011–1.013), finished about 3 Dec (2 Dec–3 Dec)');
   });
 
   it('shows Members and Outbox cards to an admin', async () => {

@@ -20,6 +20,7 @@ export class TodayPage implements OnInit {
 
   protected readonly user = this.store.selectSignal(authFeature.selectUser);
   protected readonly roles = this.store.selectSignal(authFeature.selectRoles);
+  protected readonly coopTimeZone = this.store.selectSignal(authFeature.selectCoopTimeZone);
   protected readonly areas = this.store.selectSignal(selectTodayAreaCards);
   protected readonly myBatches = this.store.selectSignal(selectMyActiveBatches);
 
