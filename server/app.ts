@@ -51,6 +51,7 @@ import { processHolderId, startScheduler } from './scheduler/scheduler';
 import { BookingNotices, bookingsRepository, createBookingFeedService, createBookingNotices, createBookingsRouter, createBookingsService } from './bookings';
 import { createKitRouter, createKitService } from './kit';
 import { createBrewPlanReads, createBrewPlanRouter, createBrewPlanWrites } from './brew-plan';
+import { createProductionReportService, createReportsRouter } from './reports';
 import { createStockDrawService, createStockRouter, createStockService } from './stock';
 
 export interface AppDeps {
@@ -154,6 +155,7 @@ export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAU
   mountApi(app, '/api/batches/:batchId/strength', createStrengthCheckRouter(createStrengthCheckService(db, toleranceClasses, distillateAnalyses.latest)));
   mountApi(app, '/api/batches/:batchId/fermentation', createFermentationRouter(db));
   mountApi(app, '/api/stock', createStockRouter(createStockService(db, config.coopTimeZone), createStockDrawService(db), db, config.coopTimeZone));
+  mountApi(app, '/api/reports', createReportsRouter(createProductionReportService(db, config.coopTimeZone)));
   app.use('/api', apiNotFound);
   app.use(createClientRouter(config.clientDist));
   app.use(errorMiddleware);

@@ -1,0 +1,2 @@
+export { createReportsRouter } from './reports.routes';
+export { createProductionReportService, type ProductionReportService } from './production-report.service';
