@@ -21,6 +21,10 @@ export function createBatchesRouter(batches: BatchesService, db: Knex): Router {
     res.status(201).json(await batches.create(req.user!, parseRequest(createBatchSchema, req.body)));
   });
 
+  router.get('/brewers', signedIn, async (_req, res) => {
+    res.json(await batches.brewers());
+  });
+
   router.get('/fermenters', signedIn, async (_req, res) => {
     res.json(await batches.fermenters());
   });

@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { hasAnyRole, SessionUser } from '@shared/auth';
-import { ACTIVE_STATUSES, Batch, BatchSummary, CreateBatchRequest, FermenterChoice, FERMENTER_HOLDING_STATUSES, UpdateBatchRequest } from '@shared/batches';
+import { ACTIVE_STATUSES, Batch, BrewerChoice, BatchSummary, CreateBatchRequest, FermenterChoice, FERMENTER_HOLDING_STATUSES, UpdateBatchRequest } from '@shared/batches';
 import { recordAudit } from '../audit/audit-log';
 import { AppError, forbidden } from '../errors/app-error';
 import { RecipesService } from '../recipes';
@@ -39,6 +39,11 @@ export function createBatchesService(db: Knex, recipes: RecipesService) {
       const rows = await batchesRepository.list(db, mine ? { brewerId: user.id, statuses: ACTIVE_STATUSES } : {});
       const points = await batchesRepository.gravityPoints(db, rows.map((r) => r.id));
       return rows.map((r) => toBatchSummary(r, points.get(r.id)!));
+    },
+
+    /** Active members, by name: whom a batch's brewer may be changed to. */
+    async brewers(): Promise<BrewerChoice[]> {
+      return (await usersRepository.list(db)).filter((u) => u.active).map((u) => ({ id: u.id, name: u.name }));
     },
 
     async fermenters(): Promise<FermenterChoice[]> {

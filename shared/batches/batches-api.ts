@@ -8,6 +8,7 @@ export const BATCHES_PATH = '/api/batches';
  *   GET    /api/batches                                 [any]  BatchSummary[] (?mine=true: the caller's, active only)
  *   POST   /api/batches                                 [any]  CreateBatchRequest → Batch (201)
  *   GET    /api/batches/fermenters                      [any]  FermenterChoice[]
+ *   GET    /api/batches/brewers                         [any]  BrewerChoice[] (active members, for a batch's brewer)
  *   GET    /api/batches/:batchId                        [any]  Batch
  *   PATCH  /api/batches/:batchId                        [editor]  UpdateBatchRequest → Batch
  *   POST   /api/batches/:batchId/status                 [editor]  MoveBatchRequest → Batch (409 status-skips-steps unless confirmed)
@@ -54,6 +55,12 @@ export type SaveBrewDayRequest = BrewDayMeasurements;
 export type CorrectionFactorRequest = { factor: number } | { refractometerReadingId: number; hydrometerReadingId: number };
 
 /** A fermenter a batch may use. */
+/** An active member who may be named a batch's brewer. */
+export interface BrewerChoice {
+  id: number;
+  name: string;
+}
+
 export interface FermenterChoice {
   id: number;
   code: string;

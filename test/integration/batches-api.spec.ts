@@ -143,4 +143,16 @@ describe('Batches API', () => {
     const [plannedListed] = (await client.get('/api/batches?mine=true')).body.filter((b: { id: number }) => b.id === planned.id);
     expect(plannedListed.forecast).toBeNull();
   });
+
+  it('when an editor opens the details form, then the brewer choices are the active members only', async () => {
+    const { client } = await signedIn(['brewer']);
+    const active = await createUser(t.db, ['member'], { name: 'Chosen brewer (test)' });
+    const gone = await createUser(t.db, ['member'], { name: 'Former member (test)', active: false });
+    const res = await client.get('/api/batches/brewers');
+    expect(res.status).toBe(200);
+    const ids = res.body.map((b: { id: number }) => b.id);
+    expect(ids).toContain(active.id);
+    expect(ids).not.toContain(gone.id);
+    expect(res.body.find((b: { id: number }) => b.id === active.id)).toEqual({ id: active.id, name: 'Chosen brewer (test)' });
+  });
 });

@@ -1,6 +1,6 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
-import { Batch, BATCHES_PATH, BatchSummary, CorrectionFactorRequest, CreateBatchRequest, FermenterChoice, MoveBatchRequest, SaveBrewDayRequest, UpdateBatchRequest } from '@shared/batches';
+import { Batch, BATCHES_PATH, BatchSummary, BrewerChoice, CorrectionFactorRequest, CreateBatchRequest, FermenterChoice, MoveBatchRequest, SaveBrewDayRequest, UpdateBatchRequest } from '@shared/batches';
 import { Observable } from 'rxjs';
 
 /** Typed calls to the batch routes. */
@@ -18,6 +18,10 @@ export class BatchesClient {
 
   fermenters(): Observable<FermenterChoice[]> {
     return this.http.get<FermenterChoice[]>(`${BATCHES_PATH}/fermenters`);
+  }
+
+  brewers(): Observable<BrewerChoice[]> {
+    return this.http.get<BrewerChoice[]>(`${BATCHES_PATH}/brewers`);
   }
 
   create(request: CreateBatchRequest): Observable<Batch> {

@@ -1,6 +1,6 @@
 import { inject } from '@angular/core';
 import { Actions, createEffect, ofType } from '@ngrx/effects';
-import { catchError, exhaustMap, filter, map, of } from 'rxjs';
+import { catchError, exhaustMap, filter, forkJoin, map, of, switchMap } from 'rxjs';
 import { BATCH_STATUS_LABELS } from '@shared/batches';
 import { apiErrorMessage, apiFieldErrors } from '@app/core/api-error-message';
 import { BatchesClient } from '../batches-client';
@@ -30,8 +30,8 @@ export const moveStatus = createEffect(
     actions$.pipe(
       ofType(BatchPageActions.statusMoveChosen, BatchPageActions.skipConfirmed),
       filter((action) => action.type === BatchPageActions.skipConfirmed.type || action.skipped.length === 0),
-      exhaustMap(({ batchId, status, type }) =>
-        client.move(batchId, { status, confirmSkip: type === BatchPageActions.skipConfirmed.type }).pipe(
+      exhaustMap(({ batchId, status, type, at }) =>
+        client.move(batchId, { status, confirmSkip: type === BatchPageActions.skipConfirmed.type, ...(at ? { at } : {}) }).pipe(
           map((batch) => BatchesApiActions.batchChangedSuccess({ batch, message: `${batch.name} is now ${BATCH_STATUS_LABELS[status].toLowerCase()}.` })),
           catchError(failed('The status could not be changed.')),
         ),
@@ -48,6 +48,35 @@ export const saveBrewDay = createEffect(
         client.saveBrewDay(batchId, measured).pipe(
           map((batch) => BatchesApiActions.batchChangedSuccess({ batch, message: 'Brew-day measurements saved.' })),
           catchError(failed('The brew-day measurements could not be saved.')),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+export const saveDetails = createEffect(
+  (actions$ = inject(Actions), client = inject(BatchesClient)) =>
+    actions$.pipe(
+      ofType(BatchPageActions.detailsSubmitted),
+      exhaustMap(({ batchId, changes }) =>
+        client.update(batchId, changes).pipe(
+          map((batch) => BatchesApiActions.batchChangedSuccess({ batch, message: 'Batch details saved.' })),
+          catchError(failed('The batch details could not be saved.')),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+/** The choices of the details form: active members for brewer, and the fermenters. */
+export const loadEditChoices = createEffect(
+  (actions$ = inject(Actions), client = inject(BatchesClient)) =>
+    actions$.pipe(
+      ofType(BatchPageActions.detailsEditOpened),
+      switchMap(() =>
+        forkJoin({ brewers: client.brewers(), fermenters: client.fermenters() }).pipe(
+          map(({ brewers, fermenters }) => BatchesApiActions.editChoicesLoadedSuccess({ brewers, fermenters })),
+          catchError((error: unknown) => of(BatchesApiActions.editChoicesLoadedFailure({ message: apiErrorMessage(error, 'Brewers and fermenters could not be loaded.') }))),
         ),
       ),
     ),

@@ -1,5 +1,5 @@
 import { createActionGroup, props } from '@ngrx/store';
-import { Batch, BatchSummary, FermenterChoice } from '@shared/batches';
+import { Batch, BatchSummary, BrewerChoice, FermenterChoice } from '@shared/batches';
 import { RecipeSummary, RecipeVersionSummary } from '@shared/recipes';
 
 export const BatchesApiActions = createActionGroup({
@@ -11,6 +11,8 @@ export const BatchesApiActions = createActionGroup({
     'Batch Loaded Failure': props<{ message: string }>(),
     'Start Choices Loaded Success': props<{ recipes: RecipeSummary[]; fermenters: FermenterChoice[] }>(),
     'Start Choices Loaded Failure': props<{ message: string }>(),
+    'Edit Choices Loaded Success': props<{ brewers: BrewerChoice[]; fermenters: FermenterChoice[] }>(),
+    'Edit Choices Loaded Failure': props<{ message: string }>(),
     'Versions Loaded Success': props<{ recipeId: number; versions: RecipeVersionSummary[] }>(),
     'Versions Loaded Failure': props<{ message: string }>(),
     'Batch Started Success': props<{ batch: Batch }>(),

@@ -15,14 +15,14 @@ export const confirmSkip = createEffect(
     actions$.pipe(
       ofType(BatchPageActions.statusMoveChosen),
       filter(({ skipped }) => skipped.length > 0),
-      switchMap(({ batchId, status, skipped }) => {
+      switchMap(({ batchId, status, skipped, at }) => {
         const names = skipped.map((s) => BATCH_STATUS_LABELS[s].toLowerCase()).join(' and ');
         const data: ConfirmDialogData = {
           title: `Skip ${names}?`,
           message: `Moving straight to ${BATCH_STATUS_LABELS[status].toLowerCase()} records no date for ${names}. Continue?`,
           confirmLabel: `Move to ${BATCH_STATUS_LABELS[status].toLowerCase()}`,
         };
-        return dialog.open(ConfirmDialog, { data }).afterClosed().pipe(filter((yes) => yes === true), map(() => BatchPageActions.skipConfirmed({ batchId, status })));
+        return dialog.open(ConfirmDialog, { data }).afterClosed().pipe(filter((yes) => yes === true), map(() => BatchPageActions.skipConfirmed({ batchId, status, at })));
       }),
     ),
   { functional: true },
@@ -40,7 +40,7 @@ export const openStartedBatch = createEffect(
 export const showBatchMessages = createEffect(
   (actions$ = inject(Actions), notifier = inject(Notifier)) =>
     actions$.pipe(
-      ofType(BatchesApiActions.batchChangedSuccess, BatchesApiActions.batchChangedFailure, BatchesApiActions.batchStartedSuccess, BatchesApiActions.batchStartedFailure),
+      ofType(BatchesApiActions.batchChangedSuccess, BatchesApiActions.batchChangedFailure, BatchesApiActions.editChoicesLoadedFailure, BatchesApiActions.batchStartedSuccess, BatchesApiActions.batchStartedFailure),
       tap((action) => notifier.notify(action.type === BatchesApiActions.batchStartedSuccess.type ? `Started ${action.batch.name}.` : action.message)),
     ),
   { functional: true, dispatch: false },

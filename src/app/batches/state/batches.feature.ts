@@ -1,6 +1,6 @@
 import { createEntityAdapter, EntityState } from '@ngrx/entity';
 import { createFeature, createReducer, on } from '@ngrx/store';
-import { Batch, BatchSummary, FermenterChoice } from '@shared/batches';
+import { Batch, BatchSummary, BrewerChoice, FermenterChoice } from '@shared/batches';
 import { RecipeSummary, RecipeVersionSummary } from '@shared/recipes';
 import { BatchListPageActions } from './batch-list-page.actions';
 import { BatchPageActions } from './batch-page.actions';
@@ -20,6 +20,8 @@ export interface BatchesState extends EntityState<BatchSummary> {
   fieldErrors: Record<string, string> | null;
   recipes: RecipeSummary[];
   fermenters: FermenterChoice[];
+  /** Whom an editor may name as the batch's brewer. */
+  brewers: BrewerChoice[];
   versions: RecipeVersionSummary[];
 }
 
@@ -38,6 +40,7 @@ export const initialBatchesState: BatchesState = batchesAdapter.getInitialState(
   fieldErrors: null,
   recipes: [],
   fermenters: [],
+  brewers: [],
   versions: [],
 });
 
@@ -56,9 +59,10 @@ export const batchesFeature = createFeature({
     on(BatchesApiActions.batchLoadedFailure, (state, { message }): BatchesState => ({ ...state, currentLoading: false, currentError: message })),
     on(BatchStartPageActions.opened, (state): BatchesState => ({ ...state, versions: [], fieldErrors: null, saving: false })),
     on(BatchesApiActions.startChoicesLoadedSuccess, (state, { recipes, fermenters }): BatchesState => ({ ...state, recipes, fermenters })),
+    on(BatchesApiActions.editChoicesLoadedSuccess, (state, { brewers, fermenters }): BatchesState => ({ ...state, brewers, fermenters })),
     on(BatchStartPageActions.recipeChosen, (state): BatchesState => ({ ...state, versions: [] })),
     on(BatchesApiActions.versionsLoadedSuccess, (state, { versions }): BatchesState => ({ ...state, versions })),
-    on(BatchStartPageActions.startSubmitted, BatchPageActions.skipConfirmed, BatchPageActions.brewDaySubmitted, (state): BatchesState => ({ ...state, saving: true, fieldErrors: null })),
+    on(BatchStartPageActions.startSubmitted, BatchPageActions.skipConfirmed, BatchPageActions.brewDaySubmitted, BatchPageActions.detailsSubmitted, (state): BatchesState => ({ ...state, saving: true, fieldErrors: null })),
     on(BatchPageActions.statusMoveChosen, (state, { skipped }): BatchesState => (skipped.length ? state : { ...state, saving: true, fieldErrors: null })),
     on(BatchesApiActions.batchStartedSuccess, (state, { batch }): BatchesState => ({ ...state, saving: false, current: batch })),
     on(BatchesApiActions.batchChangedSuccess, (state, { batch }): BatchesState => ({ ...state, saving: false, current: batch })),

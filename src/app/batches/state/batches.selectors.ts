@@ -28,5 +28,7 @@ export const selectBatchPageViewModel = createSelector(
   batchesFeature.selectSaving,
   batchesFeature.selectFieldErrors,
   authFeature.selectCoopTimeZone,
-  (batch, loading, error, saving, fieldErrors, coopTimeZone) => ({ batch, loading, error, saving, fieldErrors, coopTimeZone }),
+  batchesFeature.selectBrewers,
+  batchesFeature.selectFermenters,
+  (batch, loading, error, saving, fieldErrors, coopTimeZone, brewers, fermenters) => ({ batch, loading, error, saving, fieldErrors, coopTimeZone, brewers, fermenters }),
 );
