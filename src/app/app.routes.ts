@@ -24,6 +24,7 @@ export const routes: Routes = [
       { path: 'gravity-log', title: 'Gravity log · Commonwort', loadChildren: () => import('./gravity-log/gravity-log.routes').then((m) => m.gravityLogRoutes) },
       { path: 'kit-room', title: 'Kit room · Commonwort', loadChildren: () => import('./kit-room/kit-room.routes').then((m) => m.kitRoomRoutes) },
       { path: 'brew-plan', title: 'Brew plan · Commonwort', loadChildren: () => import('./brew-plan/brew-plan.routes').then((m) => m.brewPlanRoutes) },
+      { path: 'stock', title: 'Stock · Commonwort', loadChildren: () => import('./stock/stock.routes').then((m) => m.stockRoutes) },
       {
         path: 'strength-check',
         title: 'Strength check · Commonwort',

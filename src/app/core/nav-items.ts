@@ -23,6 +23,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Reference tables', path: '/reference-tables', icon: 'table_chart', available: true, roles: null, summary: 'Density tables: the built-in equation and uploaded tables, audited.' },
   { label: 'Kit room', path: '/kit-room', icon: 'kitchen', available: true, roles: null, summary: 'The shared kit and its bookings.' },
   { label: 'Brew plan', path: '/brew-plan', icon: 'calendar_month', available: true, roles: null, summary: 'The production calendar: batches on the fermenters, and planning the next.' },
+  { label: 'Stock', path: '/stock', icon: 'inventory_2', available: true, roles: null, summary: 'Ingredient lots, what brewing draws from them, and what to buy.' },
   { label: 'Dues', path: '/dues', icon: 'payments', available: true, roles: null, summary: 'Your dues: pay by card, keep a card for renewal, see your receipts.' },
   {
     label: 'Members',

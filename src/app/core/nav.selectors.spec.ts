@@ -10,19 +10,19 @@ describe('selectVisibleNavItems', () => {
   it('shows a member only the built areas open to everyone', () => {
     const labels = selectVisibleNavItems(stateFor(person(['member']))).map((item) => item.label);
 
-    expect(labels).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Brew plan', 'Dues']);
+    expect(labels).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Brew plan', 'Stock', 'Dues']);
   });
 
   it('adds Members and Outbox for an admin', () => {
     const labels = selectVisibleNavItems(stateFor(person(['member', 'admin']))).map((item) => item.label);
 
-    expect(labels).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Brew plan', 'Dues', 'Members', 'Outbox']);
+    expect(labels).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Brew plan', 'Stock', 'Dues', 'Members', 'Outbox']);
   });
 
   it('keeps every area of the brief in the config, in order', () => {
     expect(NAV_ITEMS.map((item) => item.label)).toEqual([
       'Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check',
-      'Reference tables', 'Kit room', 'Brew plan', 'Dues', 'Members', 'Outbox',
+      'Reference tables', 'Kit room', 'Brew plan', 'Stock', 'Dues', 'Members', 'Outbox',
     ]);
   });
 });

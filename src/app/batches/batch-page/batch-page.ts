@@ -11,6 +11,8 @@ import { ChosenMove, StatusFlow } from '../status-flow/status-flow';
 import { BatchDetailsForm } from '../batch-details-form/batch-details-form';
 import { BatchPageActions } from '../state/batch-page.actions';
 import { selectBatchPageViewModel } from '../state/batches.selectors';
+import { DrawDialogActions } from '@app/stock/state/draw-dialog.actions';
+import { selectMayKeepStock } from '@app/stock/state/stock.selectors';
 
 /** One batch: status and its dates, brew-day measurements beside the predictions, fermentation so far. */
 @Component({
@@ -27,6 +29,7 @@ export class BatchPage {
   protected readonly vm = this.store.selectSignal(selectBatchPageViewModel);
   protected readonly statusLabels = BATCH_STATUS_LABELS;
   protected readonly editingDetails = signal(false);
+  protected readonly mayKeepStock = this.store.selectSignal(selectMayKeepStock);
 
   constructor() {
     effect(() => {
@@ -58,6 +61,10 @@ export class BatchPage {
     if (!batch) return;
     if (Object.keys(changes).length) this.store.dispatch(BatchPageActions.detailsSubmitted({ batchId: batch.id, changes }));
     else this.editingDetails.set(false);
+  }
+
+  protected drawFromStock(batchId: number): void {
+    this.store.dispatch(DrawDialogActions.drawOffered({ batchId }));
   }
 
   protected saveBrewDay(measured: BrewDayMeasurements): void {

@@ -39,11 +39,11 @@ describe('Shell', () => {
   });
 
   it('lists the built areas open to everyone in the navigation of a member', async () => {
-    expect(navLabels(await render(['member']))).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Brew plan', 'Dues']);
+    expect(navLabels(await render(['member']))).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Brew plan', 'Stock', 'Dues']);
   });
 
   it('adds Members and Outbox to the navigation of an admin', async () => {
-    expect(navLabels(await render(['member', 'admin']))).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Brew plan', 'Dues', 'Members', 'Outbox']);
+    expect(navLabels(await render(['member', 'admin']))).toEqual(['Today', 'Recipes', 'Batches', 'Gravity log', 'Strength check', 'Reference tables', 'Kit room', 'Brew plan', 'Stock', 'Dues', 'Members', 'Outbox']);
   });
 
   it('dispatches Sign Out Clicked from the account menu', async () => {

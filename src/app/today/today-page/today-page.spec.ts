@@ -6,6 +6,8 @@ import { initialAuthState } from '@app/auth/state/auth.feature';
 import { generateMockSessionUser } from '@app/testing/session-user-mock';
 import { initialBatchesState } from '@app/batches/state/batches.feature';
 import { BatchSummary } from '@shared/batches';
+import { initialStockState } from '@app/stock/state/stock.feature';
+import { StockAlerts } from '@shared/stock';
 import { TodayPage } from './today-page';
 
 const fermenting: BatchSummary = {
@@ -19,7 +21,7 @@ const fermenting: BatchSummary = {
 };
 
 describe('TodayPage', () => {
-  async function render(roles: Role[], batches: BatchSummary[] = []): Promise<HTMLElement> {
+  async function render(roles: Role[], batches: BatchSummary[] = [], alerts: StockAlerts | null = null): Promise<HTMLElement> {
     TestBed.configureTestingModule({
       imports: [TodayPage],
       providers: [
@@ -28,6 +30,7 @@ describe('TodayPage', () => {
           initialState: {
             auth: { ...initialAuthState, sessionLoaded: true, user: generateMockSessionUser(roles), coopTimeZone: 'Europe/Berlin' },
             batches: { ...initialBatchesState, mine: true, ids: batches.map((b) => b.id), entities: Object.fromEntries(batches.map((b) => [b.id, b])) },
+            stock: { ...initialStockState, alerts },
           },
         }),
       ],
@@ -49,7 +52,7 @@ describe('TodayPage', () => {
     const element = await render(['member']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/brew-plan', '/dues']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/brew-plan', '/stock', '/dues']);
   });
 
   it('lists my active batches with latest gravity, attenuation, the finished flag and the forecast', async () => {
@@ -69,6 +72,23 @@ describe('TodayPage', () => {
     const element = await render(['member', 'admin']);
 
     const links = [...element.querySelectorAll<HTMLAnchorElement>('cw-area-card a')];
-    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/brew-plan', '/dues', '/members', '/outbox']);
+    expect(links.map((link) => link.getAttribute('href'))).toEqual(['/recipes', '/batches', '/gravity-log', '/strength-check', '/reference-tables', '/kit-room', '/brew-plan', '/stock', '/dues', '/members', '/outbox']);
+  });
+
+  it('shows a brewer low stock and best-before alerts in their units', async () => {
+    const alerts: StockAlerts = {
+      lowStock: [{ ingredientId: 3, ingredientName: 'Demo pale malt', ingredientKind: 'fermentables', unit: 'kg', onHand: 2, reorderLevel: 10 }],
+      bestBefore: [{ lotId: 9, ingredientName: 'Demo hop', ingredientKind: 'hops', unit: 'kg', onHand: 0.03, bestBefore: '2026-11-30', expired: true }],
+    };
+    const element = await render(['member', 'brewer'], [], alerts);
+
+    const items = [...element.querySelectorAll('cw-stock-alerts li')].map((li) => li.textContent?.trim());
+    expect(items).toEqual(['Low: Demo pale malt, 2 kg left (reorder at 10 kg)', 'Past best-before 2026-11-30: Demo hop, 30 g in lot 9']);
+  });
+
+  it('shows a member no stock alerts', async () => {
+    const element = await render(['member'], [], { lowStock: [], bestBefore: [] });
+
+    expect(element.querySelector('cw-stock-alerts')).toBeNull();
   });
 });

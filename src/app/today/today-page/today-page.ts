@@ -7,10 +7,12 @@ import { RoleBadge } from '@app/ui/role-badge/role-badge';
 import { MyBatches } from '../my-batches/my-batches';
 import { TodayPageActions } from '../state/today-page.actions';
 import { selectMyActiveBatches } from '../today.selectors';
+import { selectTodayStockAlerts } from '@app/stock/state/stock.selectors';
+import { StockAlertsPanel } from '../stock-alerts/stock-alerts';
 
 @Component({
   selector: 'cw-today-page',
-  imports: [AreaCard, RoleBadge, MyBatches],
+  imports: [AreaCard, RoleBadge, MyBatches, StockAlertsPanel],
   templateUrl: './today-page.html',
   styleUrl: './today-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -23,6 +25,7 @@ export class TodayPage implements OnInit {
   protected readonly coopTimeZone = this.store.selectSignal(authFeature.selectCoopTimeZone);
   protected readonly areas = this.store.selectSignal(selectTodayAreaCards);
   protected readonly myBatches = this.store.selectSignal(selectMyActiveBatches);
+  protected readonly stockAlerts = this.store.selectSignal(selectTodayStockAlerts);
 
   ngOnInit(): void {
     this.store.dispatch(TodayPageActions.opened());

@@ -1,0 +1,9 @@
+import { createActionGroup, emptyProps, props } from '@ngrx/store';
+
+export const ShoppingListPageActions = createActionGroup({
+  source: 'Shopping List Page',
+  events: {
+    Opened: emptyProps(),
+    'Horizon Changed': props<{ from: string; to: string }>(),
+  },
+});

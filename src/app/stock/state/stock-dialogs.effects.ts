@@ -1,0 +1,99 @@
+import { inject } from '@angular/core';
+import { MatDialog } from '@angular/material/dialog';
+import { Actions, createEffect, ofType } from '@ngrx/effects';
+import { Store } from '@ngrx/store';
+import { catchError, exhaustMap, filter, map, of, withLatestFrom } from 'rxjs';
+import { AdjustLotRequest, ReceiveLotRequest, ReorderLevelRequest } from '@shared/stock';
+import { apiErrorMessage } from '@app/core/api-error-message';
+import { AdjustLotDialog, AdjustLotDialogData } from '../adjust-lot-dialog/adjust-lot-dialog';
+import { ReceiveLotDialog, ReceiveLotDialogData } from '../receive-lot-dialog/receive-lot-dialog';
+import { ReorderLevelDialog } from '../reorder-level-dialog/reorder-level-dialog';
+import { StockClient } from '../stock-client';
+import { localToday } from '../local-today';
+import { StockApiActions } from './stock-api.actions';
+import { StockDialogsActions } from './stock-dialogs.actions';
+import { stockFeature } from './stock.feature';
+import { StockPageActions } from './stock-page.actions';
+
+const DIALOG = { maxWidth: '560px', width: 'calc(100vw - 32px)' };
+const failed = (fallback: string) => (error: unknown) => of(StockApiActions.stockChangeFailure({ message: apiErrorMessage(error, fallback) }));
+
+export const openReceiveLot = createEffect(
+  (actions$ = inject(Actions), dialog = inject(MatDialog), store = inject(Store)) =>
+    actions$.pipe(
+      ofType(StockPageActions.receiveLotClicked),
+      withLatestFrom(store.select(stockFeature.selectIngredients), store.select(stockFeature.selectUnitSystem)),
+      exhaustMap(([, ingredients, unitSystem]) =>
+        dialog.open<ReceiveLotDialog, ReceiveLotDialogData, ReceiveLotRequest>(ReceiveLotDialog, { ...DIALOG, data: { ingredients, unitSystem, today: localToday() } }).afterClosed(),
+      ),
+      filter((request): request is ReceiveLotRequest => !!request),
+      map((request) => StockDialogsActions.receiveLotSubmitted({ request })),
+    ),
+  { functional: true },
+);
+
+export const openAdjustLot = createEffect(
+  (actions$ = inject(Actions), dialog = inject(MatDialog), store = inject(Store)) =>
+    actions$.pipe(
+      ofType(StockPageActions.adjustLotClicked),
+      withLatestFrom(store.select(stockFeature.selectUnitSystem)),
+      exhaustMap(([{ lot }, unitSystem]) =>
+        dialog
+          .open<AdjustLotDialog, AdjustLotDialogData, AdjustLotRequest>(AdjustLotDialog, { ...DIALOG, data: { lot, unitSystem } })
+          .afterClosed()
+          .pipe(filter((request): request is AdjustLotRequest => !!request), map((request) => StockDialogsActions.adjustmentSubmitted({ lotId: lot.id, request }))),
+      ),
+    ),
+  { functional: true },
+);
+
+export const openReorderLevel = createEffect(
+  (actions$ = inject(Actions), dialog = inject(MatDialog), store = inject(Store)) =>
+    actions$.pipe(
+      ofType(StockPageActions.reorderLevelClicked),
+      withLatestFrom(store.select(stockFeature.selectUnitSystem)),
+      exhaustMap(([{ lot }, unitSystem]) =>
+        dialog
+          .open<ReorderLevelDialog, AdjustLotDialogData, ReorderLevelRequest>(ReorderLevelDialog, { ...DIALOG, data: { lot, unitSystem } })
+          .afterClosed()
+          .pipe(filter((request): request is ReorderLevelRequest => !!request), map((request) => StockDialogsActions.reorderLevelSubmitted({ ingredientId: lot.ingredientId, request }))),
+      ),
+    ),
+  { functional: true },
+);
+
+export const receiveLot = createEffect(
+  (actions$ = inject(Actions), client = inject(StockClient)) =>
+    actions$.pipe(
+      ofType(StockDialogsActions.receiveLotSubmitted),
+      exhaustMap(({ request }) =>
+        client.receive(request).pipe(map((lot) => StockApiActions.lotSavedSuccess({ lot, message: `Received ${lot.ingredientName}.` })), catchError(failed('The lot could not be received.'))),
+      ),
+    ),
+  { functional: true },
+);
+
+export const adjustLot = createEffect(
+  (actions$ = inject(Actions), client = inject(StockClient)) =>
+    actions$.pipe(
+      ofType(StockDialogsActions.adjustmentSubmitted),
+      exhaustMap(({ lotId, request }) =>
+        client.adjust(lotId, request).pipe(map((lot) => StockApiActions.lotSavedSuccess({ lot, message: `Adjusted ${lot.ingredientName}.` })), catchError(failed('The adjustment could not be recorded.'))),
+      ),
+    ),
+  { functional: true },
+);
+
+export const saveReorderLevel = createEffect(
+  (actions$ = inject(Actions), client = inject(StockClient)) =>
+    actions$.pipe(
+      ofType(StockDialogsActions.reorderLevelSubmitted),
+      exhaustMap(({ ingredientId, request }) =>
+        client.setReorderLevel(ingredientId, request).pipe(
+          map(() => StockApiActions.reorderLevelSavedSuccess({ message: request.level === null ? 'Reorder level cleared.' : 'Reorder level saved.' })),
+          catchError(failed('The reorder level could not be saved.')),
+        ),
+      ),
+    ),
+  { functional: true },
+);

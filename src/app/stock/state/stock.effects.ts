@@ -1,0 +1,64 @@
+import { inject } from '@angular/core';
+import { Actions, createEffect, ofType } from '@ngrx/effects';
+import { catchError, EMPTY, map, of, switchMap, tap } from 'rxjs';
+import { addDays, STOCK_LIMITS } from '@shared/stock';
+import { apiErrorMessage } from '@app/core/api-error-message';
+import { Notifier } from '@app/core/notifier';
+import { ingredientChoices } from '../ingredient-choice';
+import { localToday } from '../local-today';
+import { StockClient } from '../stock-client';
+import { loadUnitsOn } from './load-units';
+import { ShoppingListPageActions } from './shopping-list-page.actions';
+import { StockApiActions } from './stock-api.actions';
+import { StockPageActions } from './stock-page.actions';
+
+export const loadLots = createEffect(
+  (actions$ = inject(Actions), client = inject(StockClient)) =>
+    actions$.pipe(
+      ofType(StockPageActions.opened),
+      switchMap(() =>
+        client.lots().pipe(
+          map((lots) => StockApiActions.lotsLoadedSuccess({ lots })),
+          catchError((error: unknown) => of(StockApiActions.lotsLoadedFailure({ message: apiErrorMessage(error, 'The stock could not be loaded.') }))),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+/** The catalogue to receive lots for; a failure leaves the list empty and the dialog says so. */
+export const loadChoices = createEffect(
+  (actions$ = inject(Actions), client = inject(StockClient)) =>
+    actions$.pipe(
+      ofType(StockPageActions.opened),
+      switchMap(() => client.catalogue().pipe(map((catalogue) => StockApiActions.choicesLoadedSuccess({ ingredients: ingredientChoices(catalogue) })), catchError(() => EMPTY))),
+    ),
+  { functional: true },
+);
+
+/** The person's unit system, so amounts show in kg or lb, g or oz. */
+export const loadUnits = loadUnitsOn(StockPageActions.opened, ShoppingListPageActions.opened);
+
+export const loadShoppingList = createEffect(
+  (actions$ = inject(Actions), client = inject(StockClient)) =>
+    actions$.pipe(
+      ofType(ShoppingListPageActions.opened, ShoppingListPageActions.horizonChanged),
+      map((action) => ('from' in action ? action : { from: localToday(), to: addDays(localToday(), STOCK_LIMITS.horizonDefaultDays) })),
+      switchMap(({ from, to }) =>
+        client.shoppingList(from, to).pipe(
+          map((list) => StockApiActions.shoppingListLoadedSuccess({ list })),
+          catchError((error: unknown) => of(StockApiActions.shoppingListLoadedFailure({ message: apiErrorMessage(error, 'The shopping list could not be loaded.') }))),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+export const showStockMessages = createEffect(
+  (actions$ = inject(Actions), notifier = inject(Notifier)) =>
+    actions$.pipe(
+      ofType(StockApiActions.lotSavedSuccess, StockApiActions.reorderLevelSavedSuccess, StockApiActions.stockChangeFailure),
+      tap(({ message }) => notifier.notify(message)),
+    ),
+  { functional: true, dispatch: false },
+);
