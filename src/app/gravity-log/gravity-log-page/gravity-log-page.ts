@@ -59,6 +59,10 @@ export class GravityLogPage {
     this.store.dispatch(GravityLogPageActions.sortChanged(sort));
   }
 
+  protected editReading(reading: GravityReading): void {
+    this.store.dispatch(GravityLogPageActions.readingEditChosen({ reading }));
+  }
+
   protected deleteReading(reading: GravityReading): void {
     this.store.dispatch(GravityLogPageActions.readingDeleteChosen({ reading }));
   }

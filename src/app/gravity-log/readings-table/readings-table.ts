@@ -32,6 +32,7 @@ export class ReadingsTable {
   readonly coopTimeZone = input.required<string>();
   readonly pageChanged = output<{ pageIndex: number; pageSize: number }>();
   readonly sortChanged = output<{ sort: ReadingSortColumn; direction: 'asc' | 'desc' }>();
+  readonly editChosen = output<GravityReading>();
   readonly deleteChosen = output<GravityReading>();
 
   protected readonly columns = ['measuredAt', 'instrument', 'raw', 'temperature', 'correctedSg', 'source', 'actions'];

@@ -1,6 +1,6 @@
 import { createActionGroup, props } from '@ngrx/store';
 import { CorrectionFactorRequest } from '@shared/batches';
-import { GravityReading, ImportMode, ReadingColumnMapping, ReadingInput, ReadingSortColumn } from '@shared/readings';
+import { GravityReading, ImportMode, ReadingChangesRequest, ReadingColumnMapping, ReadingInput, ReadingSortColumn } from '@shared/readings';
 
 export const GravityLogPageActions = createActionGroup({
   source: 'Gravity Log Page',
@@ -9,6 +9,8 @@ export const GravityLogPageActions = createActionGroup({
     'Page Changed': props<{ pageIndex: number; pageSize: number }>(),
     'Sort Changed': props<{ sort: ReadingSortColumn; direction: 'asc' | 'desc' }>(),
     'Reading Submitted': props<{ batchId: number; input: ReadingInput }>(),
+    'Reading Edit Chosen': props<{ reading: GravityReading }>(),
+    'Reading Edit Submitted': props<{ readingId: number; changes: ReadingChangesRequest }>(),
     'Reading Delete Chosen': props<{ reading: GravityReading }>(),
     'Reading Delete Confirmed': props<{ readingId: number }>(),
     'File Submitted': props<{ batchId: number; file: File; mode: ImportMode; dryRun: boolean; columns: ReadingColumnMapping }>(),

@@ -2,7 +2,8 @@ import { inject } from '@angular/core';
 import { MatDialog } from '@angular/material/dialog';
 import { Actions, createEffect, ofType } from '@ngrx/effects';
 import { filter, map, switchMap, tap } from 'rxjs';
-import { INSTRUMENT_LABELS, UNIT_LABELS } from '@shared/readings';
+import { GravityReading, INSTRUMENT_LABELS, ReadingChangesRequest, UNIT_LABELS } from '@shared/readings';
+import { ReadingEditDialog } from '../reading-edit-dialog/reading-edit-dialog';
 import { Notifier } from '@app/core/notifier';
 import { ConfirmDialog, ConfirmDialogData } from '@app/ui/confirm-dialog/confirm-dialog';
 import { GravityLogPageActions } from './gravity-log-page.actions';
@@ -23,6 +24,21 @@ export const confirmReadingDelete = createEffect(
           message: `${INSTRUMENT_LABELS[reading.instrument]} ${reading.rawValue} ${UNIT_LABELS[reading.rawUnit]} leaves the log. The audit log keeps a record of it.`,
           confirmLabel: 'Delete reading',
         }).pipe(map(() => GravityLogPageActions.readingDeleteConfirmed({ readingId: reading.id }))),
+      ),
+    ),
+  { functional: true },
+);
+
+/** The correction of a reading's temperatures or note happens in a dialog; nothing is sent when nothing changed. */
+export const openReadingEdit = createEffect(
+  (actions$ = inject(Actions), dialog = inject(MatDialog)) =>
+    actions$.pipe(
+      ofType(GravityLogPageActions.readingEditChosen),
+      switchMap(({ reading }) =>
+        dialog.open<ReadingEditDialog, GravityReading, ReadingChangesRequest | null>(ReadingEditDialog, { data: reading }).afterClosed().pipe(
+          filter((changes): changes is ReadingChangesRequest => !!changes),
+          map((changes) => GravityLogPageActions.readingEditSubmitted({ readingId: reading.id, changes })),
+        ),
       ),
     ),
   { functional: true },
@@ -49,6 +65,7 @@ export const showLogMessages = createEffect(
     actions$.pipe(
       ofType(
         ReadingsApiActions.readingAddedSuccess, ReadingsApiActions.readingAddedFailure, ReadingsApiActions.readingDeletedSuccess, ReadingsApiActions.readingDeletedFailure,
+        ReadingsApiActions.readingEditedSuccess, ReadingsApiActions.readingEditedFailure,
         ReadingsApiActions.correctionFactorSetSuccess, ReadingsApiActions.correctionFactorSetFailure, ReadingsApiActions.pushTokenCreatedFailure,
         ReadingsApiActions.pushTokenRevokedSuccess, ReadingsApiActions.pushTokenRevokedFailure,
       ),
@@ -56,6 +73,8 @@ export const showLogMessages = createEffect(
         switch (action.type) {
           case ReadingsApiActions.readingAddedSuccess.type:
             return `Reading saved: SG ${action.reading.correctedSg.toFixed(4)} (20/20 °C).`;
+          case ReadingsApiActions.readingEditedSuccess.type:
+            return `Reading corrected: SG ${action.reading.correctedSg.toFixed(4)} (20/20 °C).`;
           case ReadingsApiActions.readingDeletedSuccess.type:
             return 'Reading deleted.';
           case ReadingsApiActions.correctionFactorSetSuccess.type:

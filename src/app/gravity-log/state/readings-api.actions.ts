@@ -12,6 +12,8 @@ export const ReadingsApiActions = createActionGroup({
     'Readings Loaded Failure': props<{ message: string }>(),
     'Reading Added Success': props<{ reading: GravityReading }>(),
     'Reading Added Failure': props<{ message: string; fields: Record<string, string> | null }>(),
+    'Reading Edited Success': props<{ reading: GravityReading }>(),
+    'Reading Edited Failure': props<{ message: string }>(),
     'Reading Deleted Success': props<{ readingId: number }>(),
     'Reading Deleted Failure': props<{ message: string }>(),
     'Import Progressed': props<{ percent: number }>(),

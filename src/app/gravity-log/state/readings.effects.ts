@@ -12,6 +12,7 @@ import { readingsFeature } from './readings.feature';
 /** The log changed: the batch's progress and the page both need reloading. */
 const LOG_CHANGED = [
   ReadingsApiActions.readingAddedSuccess,
+  ReadingsApiActions.readingEditedSuccess,
   ReadingsApiActions.readingDeletedSuccess,
   ReadingsApiActions.correctionFactorSetSuccess,
 ] as const;
@@ -57,6 +58,20 @@ export const addReading = createEffect(
         client.add(batchId, input).pipe(
           map((reading) => ReadingsApiActions.readingAddedSuccess({ reading })),
           catchError((error: unknown) => of(ReadingsApiActions.readingAddedFailure({ message: apiErrorMessage(error, 'The reading could not be saved.'), fields: apiFieldErrors(error) }))),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+export const editReading = createEffect(
+  (actions$ = inject(Actions), client = inject(ReadingsClient)) =>
+    actions$.pipe(
+      ofType(GravityLogPageActions.readingEditSubmitted),
+      concatMap(({ readingId, changes }) =>
+        client.edit(readingId, changes).pipe(
+          map((reading) => ReadingsApiActions.readingEditedSuccess({ reading })),
+          catchError((error: unknown) => of(ReadingsApiActions.readingEditedFailure({ message: apiErrorMessage(error, 'The correction could not be saved.') }))),
         ),
       ),
     ),

@@ -59,6 +59,7 @@ export const readingsFeature = createFeature({
     on(GravityLogPageActions.readingSubmitted, (state): ReadingsState => ({ ...state, saving: true, fieldErrors: null })),
     on(ReadingsApiActions.readingAddedSuccess, (state): ReadingsState => ({ ...state, saving: false, savedRevision: state.savedRevision + 1 })),
     on(ReadingsApiActions.readingAddedFailure, (state, { fields }): ReadingsState => ({ ...state, saving: false, fieldErrors: fields })),
+    on(ReadingsApiActions.readingEditedSuccess, (state, { reading }): ReadingsState => readingsAdapter.setOne(reading, state)),
     on(ReadingsApiActions.readingDeletedSuccess, (state, { readingId }): ReadingsState => readingsAdapter.removeOne(readingId, { ...state, total: state.total - 1 })),
     on(GravityLogPageActions.fileSubmitted, (state): ReadingsState => ({ ...state, import: { ...idleImport, busy: true } })),
     on(ReadingsApiActions.importProgressed, (state, { percent }): ReadingsState => ({ ...state, import: { ...state.import, percent } })),
