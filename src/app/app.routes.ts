@@ -55,6 +55,12 @@ export const routes: Routes = [
         loadChildren: () => import('./outbox/outbox.routes').then((m) => m.outboxRoutes),
       },
       {
+        path: 'production-report',
+        title: 'Production report · Commonwort',
+        canActivate: [roleGuard(['admin'])],
+        loadChildren: () => import('./production-report/production-report.routes').then((m) => m.productionReportRoutes),
+      },
+      {
         path: 'not-allowed',
         title: 'Not allowed · Commonwort',
         loadComponent: () => import('./core/not-allowed-page/not-allowed-page').then((m) => m.NotAllowedPage),
