@@ -46,6 +46,16 @@ describe('parseCatalogueCsv', () => {
     expect(result.problems[0].reason).toContain('not valid CSV');
   });
 
+  it('when one row opens a quote it never closes, then that row and every other bad row are reported by line, and good rows still come back', () => {
+    const csv = 'name,alphaAcidPercent,form\nGood,5,pellet\n"Unterminated,5,pellet\nShort,5\nHigh,abc,pellet\nAlso good,6,whole\n';
+    const result = parseCatalogueCsv(hops, csv);
+    expect(result.problems.map((p) => p.line)).toEqual([3, 4, 5]);
+    expect(result.problems[0].reason).toContain('quote');
+    expect(result.problems[1].reason).toBe('has 2 values where the header names 3 columns');
+    expect(result.problems[2].reason).toBe('alphaAcidPercent must be a number');
+    expect(result.rows.map((r) => r.line)).toEqual([2, 6]);
+  });
+
   it.each(Object.values(CATALOGUE_KINDS).map((spec) => [spec.kind, spec] as const))('when the %s columns are compared, then the stored fields are exactly the shared CSV columns', (_kind, spec) => {
     expect(Object.keys(spec.columns)).toEqual([...CATALOGUE_CSV_COLUMNS[spec.kind]]);
   });

@@ -21,25 +21,46 @@ function toValue(spec: CatalogueKind, field: string, raw: string): unknown {
 
 type Record_ = { record: string[]; info: { lines: number } };
 
+const PARSE_OPTIONS = { skip_empty_lines: true, trim: true, info: true, bom: true, relax_column_count: true } as const;
+
+/**
+ * The file read one physical line at a time: used when the whole file cannot be read (a quote that
+ * is never closed swallows the rest of the file), so the other lines are still checked and reported.
+ */
+function readLineByLine(csv: string): { records: { fields: string[]; line: number }[]; problems: CatalogueImportProblem[] } {
+  const records: { fields: string[]; line: number }[] = [];
+  const problems: CatalogueImportProblem[] = [];
+  csv.split(/\r?\n/).forEach((text, i) => {
+    if (text.trim() === '') return;
+    try {
+      const [first] = parse(text, PARSE_OPTIONS) as unknown as Record_[];
+      if (first) records.push({ fields: first.record, line: i + 1 });
+    } catch (error) {
+      const unclosed = (error as { code?: string }).code === 'CSV_QUOTE_NOT_CLOSED';
+      problems.push({ line: i + 1, reason: unclosed ? 'this line is not valid CSV: it opens a quote that is never closed' : `this line is not valid CSV: ${(error as Error).message}` });
+    }
+  });
+  return { records, problems };
+}
+
 /** Every record of the file with its line; records the parser cannot read become problems, and reading goes on. */
 function readRecords(csv: string): { records: { fields: string[]; line: number }[]; problems: CatalogueImportProblem[] } {
   const problems: CatalogueImportProblem[] = [];
+  let unclosedQuote = false;
   try {
     const parsed = parse(csv, {
-      skip_empty_lines: true,
-      trim: true,
-      info: true,
-      bom: true,
-      relax_column_count: true,
+      ...PARSE_OPTIONS,
       skip_records_with_error: true,
-      on_skip: (error: { lines?: number; message: string } | undefined) => {
-        if (error) problems.push({ line: error.lines ?? 1, reason: `this line is not valid CSV: ${error.message}` });
+      on_skip: (error: { lines?: number; message: string; code?: string } | undefined) => {
+        if (error?.code === 'CSV_QUOTE_NOT_CLOSED') unclosedQuote = true;
+        else if (error) problems.push({ line: error.lines ?? 1, reason: `this line is not valid CSV: ${error.message}` });
       },
     }) as unknown as Record_[];
+    // An unclosed quote took every line after it into one broken record: read the lines on their own.
+    if (unclosedQuote) return readLineByLine(csv);
     return { records: parsed.map((p) => ({ fields: p.record, line: p.info.lines })), problems };
-  } catch (error) {
-    const line = (error as { lines?: number }).lines ?? 1;
-    return { records: [], problems: [...problems, { line, reason: `the file is not valid CSV: ${(error as Error).message}` }] };
+  } catch {
+    return readLineByLine(csv);
   }
 }
 
