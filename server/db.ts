@@ -314,12 +314,6 @@ export interface BatchPushTokenRow {
   revoked_at: Date | null;
 }
 
-export interface PushRateWindowRow {
-  rate_key: string;
-  window_start: number;
-  hits: number;
-}
-
 /** Values a write may give where the driver reads back a DECIMAL string. */
 type Writable<Row> = { [K in keyof Row]?: Row[K] extends Decimal | null ? number | string | null : Row[K] };
 
@@ -450,7 +444,6 @@ declare module 'knex/types/tables' {
     gravity_readings: Knex.CompositeTableType<GravityReadingRow, Writable<GravityReadingRow>, Writable<GravityReadingRow>>;
     reading_uploads: Knex.CompositeTableType<ReadingUploadRow, Writable<ReadingUploadRow>, Writable<ReadingUploadRow>>;
     batch_push_tokens: Knex.CompositeTableType<BatchPushTokenRow, Writable<BatchPushTokenRow>, Writable<BatchPushTokenRow>>;
-    push_rate_windows: PushRateWindowRow;
     kit_maintenance_entries: Knex.CompositeTableType<KitMaintenanceEntryRow, Omit<KitMaintenanceEntryRow, 'id' | 'created_at'>>;
     bookings: Knex.CompositeTableType<BookingRow, Omit<BookingRow, 'id' | 'created_at' | 'updated_at' | 'cancelled_at' | 'cancelled_by_user_id'>, Partial<BookingRow>>;
     booking_feed_links: Knex.CompositeTableType<BookingFeedLinkRow, Omit<BookingFeedLinkRow, 'created_at'>>;

@@ -1,7 +1,6 @@
 import { Knex } from 'knex';
 import { AppError } from '../errors/app-error';
-import { transactionWithRetry } from '../transactions/retry-deadlock';
-import { pushTokensRepository } from './push-tokens.repository';
+import { createRateLimiter } from '../rate-limits/rate-limiter';
 
 /** Requests a logger push may make per window, per token and per address. */
 export interface PushRateLimit {
@@ -14,19 +13,18 @@ export interface PushRateLimit {
 export const DEFAULT_PUSH_RATE_LIMIT: PushRateLimit = { windowSeconds: 60, perToken: 30, perAddress: 120 };
 
 /**
- * Counts the request in MariaDB rows (fixed windows), so the cap holds across server processes;
- * answers 429 with the seconds left in the window once a key is over its cap.
+ * The push endpoint's caps, counted per token and per address in `request_counters` before the
+ * work, so they hold across server processes; a key over its cap answers 429 with the seconds left.
  */
-export async function checkPushRate(db: Knex, limit: PushRateLimit, keys: { token: string; address: string }): Promise<void> {
-  const now = Date.now();
-  const windowMs = limit.windowSeconds * 1000;
-  const windowStart = Math.floor(now / windowMs) * windowMs;
-  const [tokenHits, addressHits] = await transactionWithRetry(db, async (trx) => [
-    await pushTokensRepository.hit(trx, `token:${keys.token}`, windowStart),
-    await pushTokensRepository.hit(trx, `address:${keys.address}`, windowStart),
-  ]);
-  if (tokenHits > limit.perToken || addressHits > limit.perAddress) {
-    const retryAfterSeconds = Math.max(1, Math.ceil((windowStart + windowMs - now) / 1000));
-    throw new AppError('too-many-requests', `Too many pushes. Try again in ${retryAfterSeconds} s.`, 429, undefined, retryAfterSeconds);
-  }
+export function createPushRateCheck(db: Knex, limit: PushRateLimit) {
+  const perToken = createRateLimiter(db, 'logger-push-token', { points: limit.perToken, windowSeconds: limit.windowSeconds });
+  const perAddress = createRateLimiter(db, 'logger-push-address', { points: limit.perAddress, windowSeconds: limit.windowSeconds });
+  return async (keys: { token: string; address: string }): Promise<void> => {
+    const decisions = [await perToken.consume(keys.token), await perAddress.consume(keys.address)];
+    const refused = decisions.filter((d) => !d.allowed);
+    if (refused.length) {
+      const retryAfterSeconds = Math.max(...refused.map((d) => d.retryAfterSeconds));
+      throw new AppError('too-many-requests', `Too many pushes. Try again in ${retryAfterSeconds} s.`, 429, undefined, retryAfterSeconds);
+    }
+  };
 }

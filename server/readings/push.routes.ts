@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { Knex } from 'knex';
 import { publicRoute } from '../auth/route-access';
 import { parseRequest } from '../http/parse-request';
-import { checkPushRate, PushRateLimit } from './push-rate-limit';
+import { createPushRateCheck, PushRateLimit } from './push-rate-limit';
 import { hashPushToken, PushTokensService } from './push-tokens.service';
 import { pushReadingsSchema } from './readings.schemas';
 
@@ -12,9 +12,10 @@ import { pushReadingsSchema } from './readings.schemas';
  */
 export function createPushRouter(tokens: PushTokensService, db: Knex, limit: PushRateLimit): Router {
   const router = Router();
+  const checkPushRate = createPushRateCheck(db, limit);
   router.post('/', publicRoute, async (req, res) => {
     const token = (req.get('authorization') ?? '').replace(/^Bearer\s+/i, '').trim();
-    await checkPushRate(db, limit, { token: hashPushToken(token).slice(0, 32), address: req.ip ?? 'unknown' });
+    await checkPushRate({ token: hashPushToken(token).slice(0, 32), address: req.ip ?? 'unknown' });
     const row = await tokens.authenticate(token);
     res.json(await tokens.push(row, parseRequest(pushReadingsSchema, req.body)));
   });
