@@ -7,6 +7,7 @@ import { benchChartRender } from './bench/chart-render-bench';
 import { join } from 'node:path';
 import { benchReadingsApi } from './bench/readings-api-bench';
 import { benchBookingsApi } from './bench/bookings-api-bench';
+import { benchBrewPlan } from './bench/brew-plan-bench';
 const SAMPLES = 4096;
 // Short rounds, cases interleaved, best round kept: the machine is shared, and the best round is
 // the one least disturbed by other work.
@@ -73,7 +74,7 @@ main();
 const root = join(__dirname, '..');
 const apiBench = process.argv.includes('--science')
   ? Promise.resolve()
-  : runApiBench().then(() => benchReadingsApi(root)).then(() => benchBookingsApi(root));
+  : runApiBench().then(() => benchReadingsApi(root)).then(() => benchBookingsApi(root)).then(() => benchBrewPlan(root));
 apiBench.then(benchChartRender).then(
   () => process.exit(0),
   (error) => {

@@ -11,20 +11,29 @@ export interface ZoneDay {
   regular: boolean;
 }
 
+/** Days already placed, by zone and date: a calendar day's midnight in a zone never changes. */
+const placedDays = new Map<string, ZoneDay>();
+const PLACED_DAYS_KEPT = 20_000;
+
+function zoneDay(date: string, zone: string): ZoneDay {
+  const key = `${zone} ${date}`;
+  const known = placedDays.get(key);
+  if (known) return known;
+  const day = DateTime.fromISO(date, { zone });
+  const midnight = day.toMillis();
+  const placed = { date, midnight, regular: day.plus({ days: 1 }).toMillis() - midnight === 24 * HOUR_MS };
+  if (placedDays.size >= PLACED_DAYS_KEPT) placedDays.clear();
+  placedDays.set(key, placed);
+  return placed;
+}
+
 /**
  * `count` consecutive days from `first` (yyyy-MM-dd) in `zone`. The planner tries hundreds of brew
- * dates, so the zone's offsets are worked out once per day here rather than for every phase boundary.
+ * dates over the same weeks, so each day's offset is worked out once, not for every phase boundary.
  */
 export function zoneDays(first: string, count: number, zone: string): ZoneDay[] {
   const [y, m, d] = first.split('-').map(Number);
-  const days: ZoneDay[] = [];
-  let day = DateTime.fromObject({ year: y, month: m, day: d }, { zone });
-  for (let i = 0; i < count; i++) {
-    const next = day.plus({ days: 1 });
-    days.push({ date: new Date(Date.UTC(y, m - 1, d + i)).toISOString().slice(0, 10), midnight: day.toMillis(), regular: next.toMillis() - day.toMillis() === 24 * HOUR_MS });
-    day = next;
-  }
-  return days;
+  return Array.from({ length: count }, (_, i) => zoneDay(new Date(Date.UTC(y, m - 1, d + i)).toISOString().slice(0, 10), zone));
 }
 
 /** The instant of a whole hour of the day in `zone`. */
