@@ -31,7 +31,7 @@ export function createBrewPlanReads(db: Knex, coopTimeZone: string, recipes: Rec
       const end = start.plus({ weeks });
       const calendar = await loadPlanCalendar(db, start.toJSDate(), end.toJSDate());
       const forecasts = await forecastFinishes(db, calendar.batches);
-      const occupancy = occupancies(calendar.batches, forecasts, coopTimeZone);
+      const occupancy = occupancies(calendar.batches, forecasts, coopTimeZone, now().getTime());
       const { lanes, room } = timelineLanes(calendar, occupancy, forecasts, timelineBusy(calendar, occupancy), start.toMillis(), end.toMillis());
       return { from: start.toISODate()!, to: end.minus({ days: 1 }).toISODate()!, timeZone: coopTimeZone, lanes, room };
     },
@@ -45,7 +45,7 @@ export function createBrewPlanReads(db: Knex, coopTimeZone: string, recipes: Rec
       const nowMs = now().getTime();
       const windowEnd = monday.plus({ days: searchDays + scheduleTotalDays(schedule) + 8 }).toJSDate();
       const calendar = await loadPlanCalendar(db, new Date(Math.min(nowMs, monday.toMillis())), windowEnd);
-      const busy = planningBusy(calendar, occupancies(calendar.batches, new Map(), coopTimeZone));
+      const busy = planningBusy(calendar, occupancies(calendar.batches, new Map(), coopTimeZone, nowMs));
       const slots = proposeSlots({
         fermenters: calendar.fermenters, busy, volumeLitres: request.volumeLitres, schedule, wantedWeek: request.wantedWeek, zone: coopTimeZone,
         notBefore: nowMs, notAfter: nowMs + BOOKING_LIMITS.maxDaysAhead * DAY_MS, searchDays, limit: calendar.fermenters.length,

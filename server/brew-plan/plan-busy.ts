@@ -19,7 +19,7 @@ export function bookingBusy(booking: Booking): BusyInterval {
 }
 
 /** Each batch's expected occupancy; `forecasts` holds fermenting batches' forecast finishes (ms). */
-export function occupancies(batches: readonly CalendarBatch[], forecasts: ReadonlyMap<number, number>, zone: string): Map<number, BatchOccupancy> {
+export function occupancies(batches: readonly CalendarBatch[], forecasts: ReadonlyMap<number, number>, zone: string, now: number): Map<number, BatchOccupancy> {
   return new Map(
     batches.map((b) => [
       b.id,
@@ -30,6 +30,7 @@ export function occupancies(batches: readonly CalendarBatch[], forecasts: Readon
           booking: b.booking ? { start: b.booking.startsAt.getTime(), end: b.booking.endsAt.getTime() } : null,
         },
         zone,
+        now,
       ),
     ]),
   );

@@ -11,7 +11,7 @@ const batch = (overrides: Partial<OccupyingBatch>): OccupyingBatch => ({
 
 describe('batchOccupancy', () => {
   it('lays a planned batch out on its schedule and is not early', () => {
-    const occupancy = batchOccupancy(batch({}), zone);
+    const occupancy = batchOccupancy(batch({}), zone, 0);
 
     expect(occupancy).toMatchObject({ start: planned.start, end: planned.end, plannedEnd: planned.end, freesEarlyByDays: null });
     expect(occupancy.phases.map((p) => p.phase)).toEqual(['brew', 'fermentation', 'conditioning', 'packaging']);
@@ -19,7 +19,7 @@ describe('batchOccupancy', () => {
 
   it('ends a fermenting batch’s fermentation at its forecast finish and marks the fermenter free early by whole days', () => {
     const began = planned.phases[1].start;
-    const occupancy = batchOccupancy(batch({ status: 'fermenting', fermentingAt: began, forecastFinish: began + 6.5 * DAY }), zone);
+    const occupancy = batchOccupancy(batch({ status: 'fermenting', fermentingAt: began, forecastFinish: began + 6.5 * DAY }), zone, 0);
 
     const fermentation = occupancy.phases.find((p) => p.phase === 'fermentation')!;
     expect(fermentation.end).toBe(began + 6.5 * DAY);
@@ -32,23 +32,33 @@ describe('batchOccupancy', () => {
     const began = planned.phases[1].start;
     const booking = { start: planned.start, end: planned.end + 10 * DAY };
 
-    const occupancy = batchOccupancy(batch({ status: 'fermenting', fermentingAt: began, forecastFinish: began + 14 * DAY, booking }), zone);
+    const occupancy = batchOccupancy(batch({ status: 'fermenting', fermentingAt: began, forecastFinish: began + 14 * DAY, booking }), zone, 0);
 
     expect(occupancy.plannedEnd).toBe(booking.end);
     expect(occupancy.freesEarlyByDays).toBe(Math.floor((booking.end - occupancy.end) / DAY));
   });
 
   it('does not call a batch early without a forecast', () => {
-    const occupancy = batchOccupancy(batch({ status: 'fermenting', fermentingAt: planned.phases[1].start }), zone);
+    const occupancy = batchOccupancy(batch({ status: 'fermenting', fermentingAt: planned.phases[1].start }), zone, 0);
 
     expect(occupancy.freesEarlyByDays).toBeNull();
   });
 
   it('counts conditioning from the day it began', () => {
     const began = planned.start + 9 * DAY;
-    const occupancy = batchOccupancy(batch({ status: 'conditioning', fermentingAt: planned.start, conditioningAt: began }), zone);
+    const occupancy = batchOccupancy(batch({ status: 'conditioning', fermentingAt: planned.start, conditioningAt: began }), zone, 0);
 
     expect(occupancy.phases.find((p) => p.phase === 'conditioning')).toEqual({ phase: 'conditioning', start: began, end: began + 7 * DAY });
     expect(occupancy.end).toBe(began + 8 * DAY);
+  });
+
+  it('keeps a batch past its expected end in the fermenter until now, packaging the day after', () => {
+    const began = planned.start + 9 * DAY;
+    const now = began + 20 * DAY;
+
+    const occupancy = batchOccupancy(batch({ status: 'conditioning', fermentingAt: planned.start, conditioningAt: began }), zone, now);
+
+    expect(occupancy.phases.find((p) => p.phase === 'conditioning')!.end).toBe(now);
+    expect(occupancy.end).toBe(now + DAY);
   });
 });

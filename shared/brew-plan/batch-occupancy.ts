@@ -30,9 +30,9 @@ export interface BatchOccupancy {
   freesEarlyByDays: number | null;
 }
 
-/** The phases after fermentation, laid out from the moment fermentation ends. */
-function afterFermentation(fermentationEnd: number, schedule: BrewSchedule): PlacedPhase[] {
-  const conditioningEnd = fermentationEnd + schedule.conditioningDays * DAY_MS;
+/** The phases after fermentation, laid out from the moment fermentation ends; a batch still in the fermenter conditions at least until `now`. */
+function afterFermentation(fermentationEnd: number, schedule: BrewSchedule, now: number): PlacedPhase[] {
+  const conditioningEnd = Math.max(fermentationEnd + schedule.conditioningDays * DAY_MS, now);
   return [
     { phase: 'conditioning', start: fermentationEnd, end: conditioningEnd },
     { phase: 'packaging', start: conditioningEnd, end: conditioningEnd + DAY_MS },
@@ -42,9 +42,10 @@ function afterFermentation(fermentationEnd: number, schedule: BrewSchedule): Pla
 /**
  * A batch's occupancy: planned and brewing batches follow their schedule from the brew date;
  * a fermenting batch's fermentation ends when its forecast says (else after the planned days from
- * when it began); a conditioning batch counts its conditioning days from when it began.
+ * when it began); a conditioning batch counts its conditioning days from when it began. A batch
+ * past its expected end still holds the fermenter: it is shown conditioning until `now`.
  */
-export function batchOccupancy(batch: OccupyingBatch, zone: string): BatchOccupancy {
+export function batchOccupancy(batch: OccupyingBatch, zone: string, now: number): BatchOccupancy {
   const planned = placeSchedule(batch.brewDate, batch.schedule, zone);
   const plannedEnd = batch.booking?.end ?? planned.end;
   const start = batch.booking?.start ?? planned.start;
@@ -52,10 +53,10 @@ export function batchOccupancy(batch: OccupyingBatch, zone: string): BatchOccupa
   if (batch.status === 'fermenting') {
     const began = batch.fermentingAt ?? planned.phases[1].start;
     const fermentationEnd = batch.forecastFinish ?? began + batch.schedule.fermentationDays * DAY_MS;
-    phases = [...planned.phases.filter((p) => p.phase === 'brew' && p.end <= began), { phase: 'fermentation', start: began, end: Math.max(fermentationEnd, began) }, ...afterFermentation(Math.max(fermentationEnd, began), batch.schedule)];
+    phases = [...planned.phases.filter((p) => p.phase === 'brew' && p.end <= began), { phase: 'fermentation', start: began, end: Math.max(fermentationEnd, began) }, ...afterFermentation(Math.max(fermentationEnd, began), batch.schedule, now)];
   } else if (batch.status === 'conditioning') {
     const began = batch.conditioningAt ?? planned.phases[2]?.start ?? planned.start;
-    phases = [...planned.phases.filter((p) => p.end <= began), ...afterFermentation(began, batch.schedule)];
+    phases = [...planned.phases.filter((p) => p.end <= began), ...afterFermentation(began, batch.schedule, now)];
   }
   const phasesInOrder = phases.filter((p) => p.end > p.start);
   const end = phasesInOrder.length ? phasesInOrder[phasesInOrder.length - 1].end : planned.end;
