@@ -48,8 +48,10 @@ describe('Stock in the browser', () => {
     expect(await page.getByRole('link', { name: 'Download CSV' }).getAttribute('href')).toMatch(/^\/api\/stock\/shopping-list\/export\?from=/);
     expect(await seriousA11yViolations(page)).toEqual([]);
 
+    // Starting the batch (moving it to brewing) offers the draw on its own.
     await page.goto(`/batches/${batch.id}`);
-    await page.getByRole('button', { name: 'Draw from stock' }).click();
+    await page.getByRole('button', { name: 'Draw from stock' }).waitFor();
+    await page.getByRole('button', { name: 'Move to brewing' }).click();
     const dialog = page.getByRole('dialog', { name: 'Draw from stock' });
     await dialog.getByText('Short by 4 kg').waitFor();
     expect(await dialog.getByRole('button', { name: 'Draw' }).isDisabled()).toBe(true);
@@ -58,10 +60,19 @@ describe('Stock in the browser', () => {
     await dialog.getByText('Drawn from stock, with the shortfall recorded.').waitFor();
     const lots = await env.server.db('stock_lots').join('fermentables', 'fermentables.ingredient_id', 'stock_lots.ingredient_id').where('fermentables.id', ids.fermentableId);
     expect(lots.map((l) => Number(l.quantity_on_hand))).toEqual([0]);
+    await dialog.getByRole('button', { name: 'Close' }).click();
+
+    await stockPage.open(page);
+    await page.getByRole('button', { name: new RegExp(`^History of lot \\d+ of Test pale malt ${ids.tag}$`) }).click();
+    const history = page.getByRole('dialog', { name: /^History of lot/ });
+    await history.getByText('Received +5 kg').waitFor();
+    await history.getByText('Drawn −5 kg').waitFor();
+    await history.getByText(`for Planned pale ${ids.tag}`, { exact: false }).waitFor();
+    expect(await seriousA11yViolations(page)).toEqual([]);
     await context.close();
   }, 120_000);
 
-  it('when a member opens Stock on a 375 px phone, then each lot is a card with its figures and nothing to change', async () => {
+  it('when a member opens Stock on a 375 px phone, then each lot is a card with its figures and its history, and nothing to change', async () => {
     const brewer = await createUser(env.server.db, ['member', 'brewer']);
     const member = await createUser(env.server.db, ['member']);
     const ids = await createCatalogueEntries(env.server.db);
@@ -78,7 +89,7 @@ describe('Stock in the browser', () => {
     const box = await card.boundingBox();
     expect(box!.width).toBeLessThanOrEqual(375);
     expect(await page.getByRole('button', { name: 'Receive a lot' }).count()).toBe(0);
-    expect(await card.getByRole('button').count()).toBe(0);
+    expect(await card.getByRole('button').allTextContents()).toEqual(['History']);
     await context.close();
   }, 120_000);
 });

@@ -3,7 +3,7 @@ import { Injectable, inject } from '@angular/core';
 import { Observable } from 'rxjs';
 import { IngredientCatalogue, INGREDIENTS_PATH, UserPreferences } from '@shared/recipes';
 import { PREFERENCES_PATH } from '@app/recipes/recipes-client';
-import { AdjustLotRequest, DrawPreview, ReceiveLotRequest, ReorderLevelRequest, ShoppingList, STOCK_PATH, StockAlerts, StockDraw, StockLot } from '@shared/stock';
+import { AdjustLotRequest, DrawPreview, ReceiveLotRequest, ReorderLevelRequest, ShoppingList, STOCK_PATH, StockAlerts, StockDraw, StockLot, StockMovement } from '@shared/stock';
 
 /** Typed calls to the stock routes (and the two reads the stock pages borrow: the catalogue and the person's units). */
 @Injectable({ providedIn: 'root' })
@@ -20,6 +20,10 @@ export class StockClient {
 
   adjust(lotId: number, request: AdjustLotRequest): Observable<StockLot> {
     return this.http.post<StockLot>(`${STOCK_PATH}/lots/${lotId}/adjustments`, request);
+  }
+
+  movements(lotId: number): Observable<StockMovement[]> {
+    return this.http.get<StockMovement[]>(`${STOCK_PATH}/lots/${lotId}/movements`);
   }
 
   setReorderLevel(ingredientId: number, request: ReorderLevelRequest): Observable<void> {

@@ -35,6 +35,7 @@ export class LotTable {
   readonly filter = input('');
   readonly adjustClicked = output<StockLot>();
   readonly reorderLevelClicked = output<StockLot>();
+  readonly historyClicked = output<StockLot>();
   readonly sort = model<TableSort<LotColumn>>({ column: 'bestBefore', direction: 'asc' });
 
   protected readonly sortable = SORTABLE;

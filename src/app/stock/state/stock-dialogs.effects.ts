@@ -2,12 +2,13 @@ import { inject } from '@angular/core';
 import { MatDialog } from '@angular/material/dialog';
 import { Actions, createEffect, ofType } from '@ngrx/effects';
 import { Store } from '@ngrx/store';
-import { catchError, exhaustMap, filter, map, of, withLatestFrom } from 'rxjs';
+import { catchError, EMPTY, exhaustMap, filter, map, of, switchMap, withLatestFrom } from 'rxjs';
 import { AdjustLotRequest, ReceiveLotRequest, ReorderLevelRequest } from '@shared/stock';
 import { apiErrorMessage } from '@app/core/api-error-message';
 import { AdjustLotDialog, AdjustLotDialogData } from '../adjust-lot-dialog/adjust-lot-dialog';
 import { ReceiveLotDialog, ReceiveLotDialogData } from '../receive-lot-dialog/receive-lot-dialog';
 import { ReorderLevelDialog } from '../reorder-level-dialog/reorder-level-dialog';
+import { LotHistoryDialog, LotHistoryDialogData } from '../lot-history-dialog/lot-history-dialog';
 import { StockClient } from '../stock-client';
 import { localToday } from '../local-today';
 import { StockApiActions } from './stock-api.actions';
@@ -92,6 +93,25 @@ export const saveReorderLevel = createEffect(
         client.setReorderLevel(ingredientId, request).pipe(
           map(() => StockApiActions.reorderLevelSavedSuccess({ message: request.level === null ? 'Reorder level cleared.' : 'Reorder level saved.' })),
           catchError(failed('The reorder level could not be saved.')),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
+/** Loads a lot's movements and shows them; a failure is told in the snack bar. */
+export const showLotHistory = createEffect(
+  (actions$ = inject(Actions), dialog = inject(MatDialog), client = inject(StockClient), store = inject(Store)) =>
+    actions$.pipe(
+      ofType(StockPageActions.historyClicked),
+      withLatestFrom(store.select(stockFeature.selectUnitSystem)),
+      exhaustMap(([{ lot }, unitSystem]) =>
+        client.movements(lot.id).pipe(
+          switchMap((movements) => {
+            dialog.open<LotHistoryDialog, LotHistoryDialogData>(LotHistoryDialog, { ...DIALOG, data: { lot, movements, unitSystem } });
+            return EMPTY;
+          }),
+          catchError(failed('The lot’s history could not be loaded.')),
         ),
       ),
     ),

@@ -9,5 +9,6 @@ export const StockPageActions = createActionGroup({
     'Receive Lot Clicked': emptyProps(),
     'Adjust Lot Clicked': props<{ lot: StockLot }>(),
     'Reorder Level Clicked': props<{ lot: StockLot }>(),
+    'History Clicked': props<{ lot: StockLot }>(),
   },
 });

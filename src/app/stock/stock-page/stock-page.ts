@@ -38,6 +38,10 @@ export class StockPage implements OnInit {
     this.store.dispatch(StockPageActions.adjustLotClicked({ lot }));
   }
 
+  protected showHistory(lot: StockLot): void {
+    this.store.dispatch(StockPageActions.historyClicked({ lot }));
+  }
+
   protected setReorderLevel(lot: StockLot): void {
     this.store.dispatch(StockPageActions.reorderLevelClicked({ lot }));
   }
