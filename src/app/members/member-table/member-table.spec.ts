@@ -13,9 +13,10 @@ describe('MemberTable', () => {
     passwordResetRequestedAt: '2026-11-30T08:00:00.000Z',
   });
 
-  async function render(members: Member[], savingMemberIds: number[] = []): Promise<HTMLElement> {
+  async function render(members: Member[], savingMemberIds: number[] = [], timeZone = 'UTC'): Promise<HTMLElement> {
     fixture = TestBed.createComponent(MemberTable);
     fixture.componentRef.setInput('members', members);
+    fixture.componentRef.setInput('timeZone', timeZone);
     fixture.componentRef.setInput('savingMemberIds', savingMemberIds);
     await fixture.whenStable();
     return fixture.nativeElement as HTMLElement;
@@ -33,6 +34,14 @@ describe('MemberTable', () => {
     expect(rows[1].textContent).toContain('Jonah Weiss');
     expect(rows[1].textContent).toContain('jonah.weiss@fernhollow.example');
     expect(rows[1].textContent).toContain('Active');
+  });
+
+  it('shows when a reset was requested on the co-op clocks', async () => {
+    const late = generateMockMember({ id: 23, name: 'Late Asker', passwordResetRequestedAt: '2026-11-30T23:30:00.000Z' });
+    const element = await render([late], [], 'Pacific/Auckland');
+
+    // 23:30 UTC on 30 Nov is 12:30 on 1 Dec in Auckland (UTC+13 in summer).
+    expect(element.querySelector('.marker')?.textContent).toContain('Reset requested 1 Dec 2026, 12:30');
   });
 
   it('marks the roles a member holds as pressed', async () => {

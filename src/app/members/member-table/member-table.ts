@@ -1,4 +1,4 @@
-import { DatePipe } from '@angular/common';
+import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 import { ChangeDetectionStrategy, Component, computed, input, model, output } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
@@ -31,7 +31,7 @@ const valueOf = (member: Member, column: string): string =>
 /** The people of the co-op with their roles, state and the officer's actions on them. */
 @Component({
   selector: 'cw-member-table',
-  imports: [MatButton, MatIcon, DatePipe],
+  imports: [MatButton, MatIcon, ZonedDateTimePipe],
   templateUrl: './member-table.html',
   styleUrl: './member-table.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -40,6 +40,8 @@ export class MemberTable {
   readonly members = input.required<readonly Member[]>();
   readonly savingMemberIds = input<readonly number[]>([]);
   readonly currentUserId = input<number | null>(null);
+  /** The co-op's time zone, for the dates shown. */
+  readonly timeZone = input('UTC');
   readonly rolesChanged = output<RolesChange>();
   readonly activeChanged = output<ActiveChange>();
   readonly resetLinkRequested = output<number>();

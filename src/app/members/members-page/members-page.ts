@@ -29,6 +29,7 @@ export class MembersPage implements OnInit {
   protected readonly invitationsCreated = this.store.selectSignal(membersFeature.selectInvitationsCreated);
   protected readonly issuedLink = this.store.selectSignal(membersFeature.selectIssuedLink);
   protected readonly user = this.store.selectSignal(authFeature.selectUser);
+  protected readonly coopTimeZone = this.store.selectSignal(authFeature.selectCoopTimeZone);
 
   ngOnInit(): void {
     this.store.dispatch(MembersPageActions.opened());

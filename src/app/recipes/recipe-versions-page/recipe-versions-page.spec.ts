@@ -7,6 +7,7 @@ import { versionDifferences } from '../view-models/version-differences';
 import { RecipeVersionsPageActions } from '../state/recipe-versions-page.actions';
 import { selectRecipeVersionsViewModel } from '../state/recipes.selectors';
 import { RecipeVersionsPage } from './recipe-versions-page';
+import { authFeature } from '@app/auth/state/auth.feature';
 
 describe('RecipeVersionsPage', () => {
   const catalogue = generateMockCatalogue();
@@ -20,6 +21,7 @@ describe('RecipeVersionsPage', () => {
         provideRouter([]),
         provideMockStore({
           selectors: [
+            { selector: authFeature.selectCoopTimeZone, value: 'America/New_York' },
             {
               selector: selectRecipeVersionsViewModel,
               value: {
@@ -59,6 +61,13 @@ describe('RecipeVersionsPage', () => {
 
     expect(store.dispatch).toHaveBeenCalledWith(RecipeVersionsPageActions.opened({ recipeId: 41 }));
     expect(store.dispatch).toHaveBeenCalledWith(RecipeVersionsPageActions.versionsPicked({ recipeId: 41, left: 1, right: 2 }));
+  });
+
+  it('lists each version with its date and time on the co-op clocks', async () => {
+    const { element } = await render(false);
+
+    // 18:00 UTC on 30 Nov 2026 is 13:00 in New York (UTC-5 in winter).
+    expect(element.querySelector('li')?.textContent).toContain('Version 1 · 30 Nov 2026, 13:00');
   });
 
   it('marks the lines that differ between the two versions', async () => {

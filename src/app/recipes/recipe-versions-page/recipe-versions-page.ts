@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal, untracked } from '@angular/core';
 import { FormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
@@ -6,6 +5,8 @@ import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { RouterLink } from '@angular/router';
 import { Store } from '@ngrx/store';
+import { authFeature } from '@app/auth/state/auth.feature';
+import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 import { RecipeUnavailable } from '../recipe-unavailable/recipe-unavailable';
 import { VersionDiff } from '../version-diff/version-diff';
 import { RecipeVersionsPageActions } from '../state/recipe-versions-page.actions';
@@ -15,7 +16,7 @@ import { selectRecipeVersionsViewModel } from '../state/recipes.selectors';
 /** A recipe's versions: pick two and see them side by side. */
 @Component({
   selector: 'cw-recipe-versions-page',
-  imports: [VersionDiff, RecipeUnavailable, RouterLink, FormsModule, DatePipe, MatButton, MatFormField, MatLabel, MatSelect, MatOption],
+  imports: [VersionDiff, RecipeUnavailable, RouterLink, FormsModule, ZonedDateTimePipe, MatButton, MatFormField, MatLabel, MatSelect, MatOption],
   templateUrl: './recipe-versions-page.html',
   styleUrl: './recipe-versions-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -26,6 +27,7 @@ export class RecipeVersionsPage {
 
   protected readonly vm = this.store.selectSignal(selectRecipeVersionsViewModel);
   protected readonly error = this.store.selectSignal(recipesFeature.selectCurrentError);
+  protected readonly timeZone = this.store.selectSignal(authFeature.selectCoopTimeZone);
   protected readonly left = signal<number | null>(null);
   protected readonly right = signal<number | null>(null);
   /** The version numbers alone, so a comparison arriving in the view model does not count as a new list. */
