@@ -31,6 +31,7 @@ describe('buildTimelineView', () => {
     expect(entry.forecast).toBe('Forecast: fermentation finishes Tue 12 Jan');
     expect(entry.freesEarly).toBe('Frees up 5 days early, by the gravity forecast');
     expect(entry.movable).toBe(false);
+    expect(view.lanes[0].freesEarly).toBe(true);
   });
 
   it('lets a planned batch be moved from its brew date', () => {

@@ -35,6 +35,8 @@ export interface LaneView {
   inService: boolean;
   inUsePercent: number;
   maintenancePercent: number;
+  /** Set when a batch in it is forecast to hand it back before its planned end. */
+  freesEarly: boolean;
   entries: EntryView[];
 }
 
@@ -95,6 +97,7 @@ function laneView(lane: TimelineLane, zone: string, from: number, to: number): L
     inService: lane.inService,
     inUsePercent: percent(lane.utilisation.inUse),
     maintenancePercent: percent(lane.utilisation.maintenance),
+    freesEarly: lane.entries.some((e) => e.freesEarlyByDays !== null),
     entries: lane.entries.map((e) => entryView(e, zone, from, to)),
   };
 }
