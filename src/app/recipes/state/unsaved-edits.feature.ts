@@ -22,6 +22,8 @@ export const unsavedEditsFeature = createFeature({
       RecipesApiActions.recipeLoadedSuccess,
       RecipesApiActions.recipeCreatedSuccess,
       RecipesApiActions.recipeSavedSuccess,
+      // Nothing changed since the version: the editor holds what is saved.
+      RecipesApiActions.recipeSaveUnchanged,
       RecipesApiActions.recipeClonedSuccess,
       RecipesApiActions.recipeImportedSuccess,
       AuthApiActions.signOutSuccess,
