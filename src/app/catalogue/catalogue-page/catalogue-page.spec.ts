@@ -48,7 +48,7 @@ describe('CataloguePage', () => {
     const { store, element } = await render(false);
 
     expect(store.dispatch).toHaveBeenCalledWith(CataloguePageActions.opened());
-    expect(element.querySelector('tbody th')?.textContent).toContain('Pale base malt');
+    expect([...element.querySelectorAll('tbody th')].map((th) => th.textContent?.trim())).toContain('Pale base malt');
   });
 
   it('offers a member no edit, retire, add or import', async () => {
