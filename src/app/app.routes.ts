@@ -23,6 +23,12 @@ export const routes: Routes = [
       { path: 'batches', title: 'Batches · Commonwort', loadChildren: () => import('./batches/batches.routes').then((m) => m.batchesRoutes) },
       { path: 'gravity-log', title: 'Gravity log · Commonwort', loadChildren: () => import('./gravity-log/gravity-log.routes').then((m) => m.gravityLogRoutes) },
       { path: 'kit-room', title: 'Kit room · Commonwort', loadChildren: () => import('./kit-room/kit-room.routes').then((m) => m.kitRoomRoutes) },
+      {
+        path: 'brew-plan/report',
+        title: 'Production report · Commonwort',
+        canActivate: [roleGuard(['admin'])],
+        loadChildren: () => import('./production-report/production-report.routes').then((m) => m.productionReportRoutes),
+      },
       { path: 'brew-plan', title: 'Brew plan · Commonwort', loadChildren: () => import('./brew-plan/brew-plan.routes').then((m) => m.brewPlanRoutes) },
       { path: 'stock', title: 'Stock · Commonwort', loadChildren: () => import('./stock/stock.routes').then((m) => m.stockRoutes) },
       {
@@ -54,12 +60,7 @@ export const routes: Routes = [
         canActivate: [roleGuard(['admin'])],
         loadChildren: () => import('./outbox/outbox.routes').then((m) => m.outboxRoutes),
       },
-      {
-        path: 'production-report',
-        title: 'Production report · Commonwort',
-        canActivate: [roleGuard(['admin'])],
-        loadChildren: () => import('./production-report/production-report.routes').then((m) => m.productionReportRoutes),
-      },
+      { path: 'production-report', redirectTo: 'brew-plan/report' },
       {
         path: 'not-allowed',
         title: 'Not allowed · Commonwort',

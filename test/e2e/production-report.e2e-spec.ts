@@ -24,7 +24,7 @@ describe('Production report in the browser', () => {
     await signInPage.signIn(page, admin.email, admin.password);
     await page.waitForURL(/\/today/);
 
-    await productionReportPage.openFromKitRoom(page);
+    await productionReportPage.openFromBrewPlan(page);
     const thisMonth = `${monthStart.setLocale('en-US').toFormat('LLL yyyy')} (so far)`;
     const row = await productionReportPage.monthRow(page, thisMonth);
     const csv = await productionReportPage.downloadCsv(page);

@@ -3,10 +3,11 @@ import { Page } from 'playwright-core';
 
 /** The production report page (admins), by what a person sees. */
 export const productionReportPage = {
-  /** From the Kit room, as an admin finds it. */
-  async openFromKitRoom(page: Page): Promise<void> {
-    await page.goto('/kit-room');
+  /** From the Brew plan, as an admin finds it. */
+  async openFromBrewPlan(page: Page): Promise<void> {
+    await page.goto('/brew-plan');
     await page.getByRole('link', { name: 'Production report' }).click();
+    await page.waitForURL(/\/brew-plan\/report$/);
     await page.getByRole('heading', { level: 1, name: 'Production report' }).waitFor();
     await page.getByRole('region', { name: 'Production by month' }).waitFor();
   },

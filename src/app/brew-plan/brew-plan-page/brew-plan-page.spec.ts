@@ -62,6 +62,14 @@ describe('BrewPlanPage', () => {
     expect(element.querySelector('cw-move-batch-form')).toBeNull();
   });
 
+  it('links admins, and only admins, to the production report', async () => {
+    const reportLink = (element: HTMLElement) => [...element.querySelectorAll('a')].find((a) => a.textContent?.includes('Production report'));
+
+    expect(reportLink(await render(['member', 'admin']))?.getAttribute('href')).toBe('/brew-plan/report');
+    TestBed.resetTestingModule();
+    expect(reportLink(await render(['member', 'brewer']))).toBeUndefined();
+  });
+
   it('lets a brewer accept a proposal, sending the schedule the planner used', async () => {
     const proposals: SlotProposals = {
       recipeName: 'Hedge pale', schedule: { fermentationDays: 10, conditioningDays: 4 }, basis: 'brewer', weekStart: '2027-01-11',

@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, inject, OnInit, signal } from '@angular/core';
-import { MatButton } from '@angular/material/button';
+import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
+import { RouterLink } from '@angular/router';
 import { Store } from '@ngrx/store';
 import { DateTime } from 'luxon';
 import { PLAN_PHASE_LABELS, SlotProposal } from '@shared/brew-plan';
@@ -15,7 +16,7 @@ import { selectMayPlan, selectTimelineView } from '../state/brew-plan.selectors'
 
 @Component({
   selector: 'cw-brew-plan-page',
-  imports: [FermenterLane, PlanBatchForm, SlotProposals, MatButton, MatIcon],
+  imports: [FermenterLane, PlanBatchForm, SlotProposals, MatAnchor, MatButton, MatIcon, RouterLink],
   templateUrl: './brew-plan-page.html',
   styleUrl: './brew-plan-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -25,6 +26,9 @@ export class BrewPlanPage implements OnInit {
 
   protected readonly zone = this.store.selectSignal(authFeature.selectCoopTimeZone);
   protected readonly mayPlan = this.store.selectSignal(selectMayPlan);
+  private readonly user = this.store.selectSignal(authFeature.selectUser);
+  /** Admins also read the production report from here. */
+  protected readonly isAdmin = computed(() => this.user()?.roles.includes('admin') ?? false);
   protected readonly timeline = this.store.selectSignal(selectTimelineView);
   protected readonly loading = this.store.selectSignal(brewPlanFeature.selectLoading);
   protected readonly loadError = this.store.selectSignal(brewPlanFeature.selectLoadError);
