@@ -48,6 +48,40 @@ describe('Brew plan in the browser', () => {
     await context.close();
   }, 120_000);
 
+  it('when a brewer moves a planned batch onto a maintenance block, then the plan names the block; a free date moves it', async () => {
+    const db = env.server.db;
+    const brewer = await createUser(db, ['member', 'brewer'], { name: 'Ola Moveright' });
+    await givePaidUpDues(db, brewer.id);
+    const admin = await ApiClient.signedIn(env.server.baseUrl, await createUser(db, ['member', 'admin']));
+    const fermenter = await createSizedFermenter(db, 1800);
+    const api = await ApiClient.signedIn(env.server.baseUrl, brewer);
+    const recipe = await createAleRecipe(db, api);
+    const zone = loadConfig().coopTimeZone;
+    const week = (n: number) => DateTime.now().setZone(zone).startOf('week').plus({ weeks: n });
+    const batchName = `Moving mild ${randomUUID().slice(0, 4)}`;
+    const planned = await api.send('post', '/api/brew-plan/batches', { name: batchName, recipeId: recipe.id, recipeVersion: recipe.version, volumeLitres: 1800, kitItemId: fermenter.id, brewDate: week(1).toISODate(), fermentationDays: 14, conditioningDays: 7 });
+    expect(planned.status).toBe(201);
+    // The batch holds the fermenter from week 1 to week 4; the block is in week 5.
+    const blockDay = week(5).plus({ days: 2 }).toISODate();
+    const block = await admin.send('post', '/api/bookings', { kitItemId: fermenter.id, start: `${blockDay}T09:00`, end: `${blockDay}T17:00`, purpose: 'maintenance', note: 'Seal change' });
+    expect(block.status).toBe(201);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
+    await signInPage.signIn(page, brewer.email, brewer.password);
+    await page.waitForURL(/\/today/);
+
+    await brewPlanPage.open(page);
+    await brewPlanPage.moveBatch(page, batchName, week(4).toISODate()!);
+    const refusal = brewPlanPage.lane(page, fermenter.code).getByRole('alert');
+    await refusal.waitFor();
+    expect(await refusal.textContent()).toContain(`blocked for maintenance (booking #${block.body.id})`);
+
+    await brewPlanPage.moveBatch(page, batchName, week(6).toISODate()!);
+    await page.getByText(`Planned on ${fermenter.code}: booked from ${week(6).toISODate()} 08:00`).waitFor();
+    await brewPlanPage.lane(page, fermenter.code).getByText(`Mon ${week(6).toFormat('d LLL', { locale: 'en-GB' })} 08:00`).waitFor();
+    expect(await brewPlanPage.lane(page, fermenter.code).getByRole('alert').count()).toBe(0);
+    await context.close();
+  }, 120_000);
+
   it('when a member opens the plan on a 375 px screen, then every fermenter is listed without sideways scrolling and nothing can be planned', async () => {
     const member = await createUser(env.server.db, ['member']);
     const { context, page } = await newPage(env.browser, env.server.baseUrl, { width: 375, height: 800 });

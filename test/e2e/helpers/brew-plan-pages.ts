@@ -22,6 +22,13 @@ export const brewPlanPage = {
     return page.getByRole('list', { name: 'Proposed slots' });
   },
 
+  /** Moves a planned batch to another brew date with the form in its lane entry. */
+  async moveBatch(page: Page, batchName: string, brewDate: string): Promise<void> {
+    const form = page.getByRole('form', { name: `Move ${batchName}` });
+    await form.getByLabel('New brew date').fill(brewDate);
+    await form.getByRole('button', { name: 'Move' }).click();
+  },
+
   /** The lane of one fermenter, found by its heading. */
   lane(page: Page, code: string) {
     return page.locator('cw-fermenter-lane').filter({ has: page.getByRole('heading', { level: 3, name: new RegExp(`^${code} `) }) });

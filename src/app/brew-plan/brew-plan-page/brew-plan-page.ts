@@ -44,6 +44,7 @@ export class BrewPlanPage implements OnInit {
   protected readonly from = this.store.selectSignal(brewPlanFeature.selectFrom);
   protected readonly today = computed(() => DateTime.now().setZone(this.zone()).startOf('day'));
   protected readonly phaseLabels = Object.entries(PLAN_PHASE_LABELS);
+  protected readonly fermenterChoices = computed(() => (this.timeline()?.lanes ?? []).filter((l) => l.inService).map((l) => ({ id: l.kitItemId, label: `${l.code} · ${l.capacity}` })));
   /** The batch name and request behind the proposals shown, for accepting one of them. */
   private readonly asked = signal<PlanRequest | null>(null);
 
@@ -81,6 +82,6 @@ export class BrewPlanPage implements OnInit {
   }
 
   protected move(move: LaneMove): void {
-    this.store.dispatch(BrewPlanPageActions.batchMoveSubmitted({ batchId: move.batchId, request: { brewDate: move.brewDate } }));
+    this.store.dispatch(BrewPlanPageActions.batchMoveSubmitted({ batchId: move.batchId, request: { brewDate: move.brewDate, kitItemId: move.kitItemId } }));
   }
 }

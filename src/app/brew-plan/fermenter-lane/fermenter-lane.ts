@@ -2,13 +2,14 @@ import { ChangeDetectionStrategy, Component, input, output } from '@angular/core
 import { MatCard } from '@angular/material/card';
 import { MatIcon } from '@angular/material/icon';
 import { DateTime } from 'luxon';
-import { MoveBatchForm } from '../move-batch-form/move-batch-form';
+import { FermenterChoice, MoveBatchForm } from '../move-batch-form/move-batch-form';
 import { LaneView } from '../view-models/timeline-view';
 
 /** A move asked for on the lane. */
 export interface LaneMove {
   batchId: number;
   brewDate: string;
+  kitItemId: number;
 }
 
 /** One fermenter over the period: its utilisation and, as a list, each batch, booking and block with a bar of its phases. */
@@ -22,6 +23,8 @@ export interface LaneMove {
 export class FermenterLane {
   readonly lane = input.required<LaneView>();
   readonly mayPlan = input(false);
+  /** Where a planned batch may be moved to. */
+  readonly fermenters = input<FermenterChoice[]>([]);
   readonly today = input.required<DateTime>();
   readonly movingBatchId = input<number | null>(null);
   readonly moveError = input<{ batchId: number; message: string } | null>(null);

@@ -70,7 +70,8 @@ function segment(kind: string, label: string, start: string, end: string, from: 
 function entryView(entry: TimelineEntry, zone: string, from: number, to: number): EntryView {
   const f = formatter(zone);
   const parts = entry.kind === 'batch' ? entry.phases.map((p) => segment(p.phase, PLAN_PHASE_LABELS[p.phase], p.start, p.end, from, to)) : [segment(entry.kind, entry.label, entry.start, entry.end, from, to)];
-  const cleaning = entry.heldUntil ? segment('turnaround', 'Cleaning turnaround', entry.end, entry.heldUntil, from, to) : null;
+  const held = entry.heldUntil && entry.heldUntil !== entry.end ? entry.heldUntil : null;
+  const cleaning = held ? segment('turnaround', 'Cleaning turnaround', entry.end, held, from, to) : null;
   const tag = entry.kind === 'batch' ? BATCH_STATUS_LABELS[entry.batchStatus!] : entry.kind === 'booking' ? 'Booking' : 'Maintenance';
   return {
     key: `${entry.kind}-${entry.batchId ?? entry.bookingId}`,
@@ -78,7 +79,7 @@ function entryView(entry: TimelineEntry, zone: string, from: number, to: number)
     label: entry.label,
     tag,
     when: `${f.dayTime(entry.start)} – ${f.dayTime(entry.end)}`,
-    heldUntil: entry.heldUntil ? f.dayTime(entry.heldUntil) : null,
+    heldUntil: held ? f.dayTime(held) : null,
     segments: [...parts, cleaning].filter((s): s is BarSegment => s !== null),
     forecast: entry.forecastFinish ? `Forecast: fermentation finishes ${f.day(entry.forecastFinish)}` : null,
     freesEarly: entry.freesEarlyByDays ? `Frees up ${entry.freesEarlyByDays} day${entry.freesEarlyByDays === 1 ? '' : 's'} early, by the gravity forecast` : null,
