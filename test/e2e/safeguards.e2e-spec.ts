@@ -36,6 +36,44 @@ describe('Recipe editor safeguards in the browser', () => {
     await context.close();
   }, 90_000);
 
+  it('when a member closes the tab with unsaved edits, then the browser asks first; without edits it does not', async () => {
+    const member = await createUser(env.server.db, ['member']);
+    const { tag } = await createCatalogueEntries(env.server.db);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
+    await signInPage.signIn(page, member.email, member.password);
+    await page.waitForURL(/\/today/);
+    const asked: string[] = [];
+    page.on('dialog', (dialog) => {
+      asked.push(dialog.type());
+      void dialog.dismiss();
+    });
+
+    await recipeEditorPage.openNew(page);
+    // A click first: the browser asks before unloading only a page the person has interacted with.
+    await page.getByLabel('Recipe name').click();
+    await recipeEditorPage.name(page, `Tab-closed porter ${tag}`);
+    await page.getByTestId('unsaved-marker').waitFor();
+    await page.close({ runBeforeUnload: true });
+    await page.waitForTimeout(500);
+    // Dismissed: the tab stays open with the edits.
+    expect(asked).toEqual(['beforeunload']);
+    expect(page.isClosed()).toBe(false);
+    expect(await page.getByLabel('Recipe name').inputValue()).toBe(`Tab-closed porter ${tag}`);
+
+    const fresh = await context.newPage();
+    const freshAsked: string[] = [];
+    fresh.on('dialog', (dialog) => {
+      freshAsked.push(dialog.type());
+      void dialog.dismiss();
+    });
+    await recipeEditorPage.openNew(fresh);
+    await fresh.getByLabel('Recipe name').click();
+    await fresh.close({ runBeforeUnload: true });
+    await fresh.waitForEvent('close', { timeout: 10_000 });
+    expect(freshAsked).toEqual([]);
+    await context.close();
+  }, 90_000);
+
   it('when a member types on a 375 px phone, then OG, FG, both ABV figures, IBU and colour stay in sight and follow the typing', async () => {
     const member = await createUser(env.server.db, ['member']);
     const { tag } = await createCatalogueEntries(env.server.db);
