@@ -4,7 +4,7 @@ import { stockLevelsRepository } from '../server/stock/stock-levels.repository';
 
 // A little demo stock (quantities, dates and suppliers invented): enough malt for the planned mild,
 // too few hops and no yeast for it, so the shopping list has something to show, and one small lot
-// of malt whose best-before is near, so Today shows a brewer the alert.
+// of malt whose best-before is near, so Today shows a brewer the alerts.
 const DEMO_LOTS: { table: string; name: string; unit: 'kg' | 'each'; quantity: number; receivedDay: number; bestBeforeDay: number | null; note: string }[] = [
   { table: 'fermentables', name: 'Pale ale malt', unit: 'kg', quantity: 25, receivedDay: -40, bestBeforeDay: 200, note: 'Demo supplier: Hollow Lane Maltings (invented)' },
   { table: 'fermentables', name: 'Pale ale malt', unit: 'kg', quantity: 2, receivedDay: -300, bestBeforeDay: 20, note: 'Opened sack, demo (invented)' },
@@ -30,4 +30,7 @@ export async function seed(knex: Knex): Promise<void> {
   }
   const malt = await knex('fermentables').where({ name: 'Pale ale malt' }).first('ingredient_id');
   if (malt) await stockLevelsRepository.setReorderLevel(knex, malt.ingredient_id, 'kg', 10);
+  // 30 g on hand against a 50 g level: Today shows brewers the low-stock alert too.
+  const hop = await knex('hops').where({ name: 'English aroma hop' }).first('ingredient_id');
+  if (hop) await stockLevelsRepository.setReorderLevel(knex, hop.ingredient_id, 'kg', 0.05);
 }

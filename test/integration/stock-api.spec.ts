@@ -142,4 +142,35 @@ describe('Stock API', () => {
     const res = await member.client.send('post', '/api/stock/lots', { ingredientId: ingredients.malt, unit: 'kg', quantity: 1, receivedOn: '2026-12-01', bestBefore: null });
     expect(res.status).toBe(403);
   });
+
+  it('when an ingredient is at its reorder level and a lot is near its best-before, then brewers see both alerts and members may not ask', async () => {
+    const { client } = await signedIn();
+    const member = await signedIn(['member']);
+    const { ingredients } = await createStockRecipe(t.db, client);
+    const soon = new Date(Date.now() + 10 * 86_400_000).toISOString().slice(0, 10);
+    const lot = await receiveLot(client, ingredients.hop, 'kg', 0.2, soon, '2026-11-01');
+    await receiveLot(client, ingredients.malt, 'kg', 3, null);
+    expect((await client.send('put', `/api/stock/reorder-levels/${ingredients.malt}`, { unit: 'kg', level: 5 })).status).toBe(204);
+    expect((await client.send('put', `/api/stock/reorder-levels/${ingredients.yeast}`, { unit: 'each', level: 2 })).status).toBe(204);
+    expect((await client.send('put', `/api/stock/reorder-levels/${ingredients.hop}`, { unit: 'kg', level: 0.1 })).status).toBe(204);
+
+    const alerts = (await client.get('/api/stock/alerts')).body;
+    const low = alerts.lowStock.filter((l: { ingredientId: number }) => Object.values(ingredients).includes(l.ingredientId));
+    // Malt 3 kg ≤ 5 kg and yeast 0 ≤ 2 are low; hops 0.2 kg > 0.1 kg are not.
+    expect(low.map((l: { ingredientId: number; onHand: number }) => [l.ingredientId, l.onHand]).sort()).toEqual([[ingredients.malt, 3], [ingredients.yeast, 0]].sort());
+    expect(alerts.bestBefore.find((b: { lotId: number }) => b.lotId === lot.id)).toMatchObject({ bestBefore: soon, expired: false, onHand: 0.2 });
+    expect((await member.client.get('/api/stock/alerts')).status).toBe(403);
+    const audit = await t.db('audit_log').where({ action: 'stock-reorder-level-set', subject_type: 'ingredient', subject_id: ingredients.malt });
+    expect(audit).toHaveLength(1);
+  });
+
+  it('when a batch has no recipe version, then the draw preview says why and nothing can be drawn', async () => {
+    const { client } = await signedIn();
+    const res = await client.send('post', '/api/batches', { name: 'No recipe', recipeId: null, recipeVersion: null, brewDate: '2026-11-20', plannedVolumeLitres: 20, fermenterId: null });
+    const preview = (await client.get(`/api/stock/batches/${res.body.id}/draw`)).body;
+    expect(preview).toMatchObject({ batchId: res.body.id, lines: [], drawn: null, blockedReason: 'This batch has no recipe version, so it has no bill to draw.' });
+    const draw = await client.send('post', `/api/stock/batches/${res.body.id}/draw`, { acceptShortfall: true });
+    expect(draw.status).toBe(409);
+    expect(draw.body.error.code).toBe('stock-draw-blocked');
+  });
 });
