@@ -92,6 +92,20 @@ describe('Brew plan API', () => {
     expect(await t.db('bookings').where({ kit_item_id: item.id })).toHaveLength(1);
   });
 
+  it('when two brewers accept the same slot at once, then exactly one batch is planned and the other answers 409', async () => {
+    const first = await brewer();
+    const second = await brewer();
+    const recipes = [await createAleRecipe(t.db, first.client), await createAleRecipe(t.db, second.client)];
+    const item = await createSizedFermenter(t.db, 1994);
+    const week = mondayInWeeks(zone, 7);
+
+    const answers = await Promise.all([first.client, second.client].map((client, i) => client.send('post', '/api/brew-plan/batches', acceptBody(recipes[i], item.id, week, 1994))));
+
+    expect(answers.map((a) => a.status).sort()).toEqual([201, 409]);
+    expect(await t.db('bookings').where({ kit_item_id: item.id })).toHaveLength(1);
+    expect(await t.db('batches').where({ fermenter_kit_item_id: item.id })).toHaveLength(1);
+  });
+
   it('when the wanted week is booked, then the proposal starts after that booking’s cleaning turnaround', async () => {
     const { client } = await brewer();
     const recipe = await createAleRecipe(t.db, client);
