@@ -70,6 +70,12 @@ describe('BrewPlanPage', () => {
     expect(reportLink(await render(['member', 'brewer']))).toBeUndefined();
   });
 
+  it('links everyone to the stock needs of the planned batches', async () => {
+    const element = await render(['member']);
+
+    expect([...element.querySelectorAll('a')].find((a) => a.textContent?.includes('Stock needs'))?.getAttribute('href')).toBe('/stock/to-buy');
+  });
+
   it('lets a brewer accept a proposal, sending the schedule the planner used', async () => {
     const proposals: SlotProposals = {
       recipeName: 'Hedge pale', schedule: { fermentationDays: 10, conditioningDays: 4 }, basis: 'brewer', weekStart: '2027-01-11',
