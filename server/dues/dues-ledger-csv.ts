@@ -1,10 +1,5 @@
-import { stringify } from 'csv-stringify/sync';
 import { DuesLedger, formatDuesAmount } from '@shared/dues';
-
-/** A cell a spreadsheet would read as a formula gets a leading apostrophe (CSV injection). */
-export function neutraliseCell(value: string): string {
-  return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
-}
+import { csvOfCells } from '../http/csv-cells';
 
 const HEADER = ['Paid at', 'Member', 'E-mail', 'Plan', 'Amount', 'Currency', 'Method', 'Kind', 'Status', 'Period start', 'Period end', 'Refunded at', 'Member paid through', 'Member standing'];
 
@@ -28,7 +23,7 @@ export function ledgerCsv(ledger: DuesLedger): string {
       p.refundedAt ?? '',
       member?.paidThrough ?? '',
       member?.status ?? '',
-    ].map(neutraliseCell);
+    ];
   });
-  return stringify([HEADER, ...rows]);
+  return csvOfCells([HEADER, ...rows]);
 }

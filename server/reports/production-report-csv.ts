@@ -1,7 +1,6 @@
-import { stringify } from 'csv-stringify/sync';
 import { BATCH_STATUS_LABELS, BATCH_STATUSES } from '@shared/batches';
 import { ProductionReport } from '@shared/production-report';
-import { neutraliseCell } from '../dues/dues-ledger-csv';
+import { csvOfCells } from '../http/csv-cells';
 
 const percent = (share: number) => (share * 100).toFixed(1);
 
@@ -30,5 +29,5 @@ export function productionReportCsv(report: ProductionReport): string {
     percent(m.room.maintenance),
     ...report.fermenters.map((f) => percent(m.fermenters.find((x) => x.kitItemId === f.id)?.inUse ?? 0)),
   ]);
-  return stringify([header, ...rows].map((row) => row.map(neutraliseCell)));
+  return csvOfCells([header, ...rows]);
 }

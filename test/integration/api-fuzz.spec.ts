@@ -3,7 +3,7 @@ import { CSRF_HEADER } from '@server/auth';
 import { ROLES } from '@shared/auth';
 import { ApiClient } from './helpers/api-client';
 import { ApiRoute, listApiRoutes } from './helpers/route-table';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 const RUNS_PER_ROUTE = 10;
@@ -54,12 +54,7 @@ function pathFor(route: ApiRoute, ids: string[], others: string[]): string {
 }
 
 describe('Every API route under arbitrary input', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   it('when routes get arbitrary bodies, ids and strings (lone surrogates, deep nesting, huge numbers), then none answers a 5xx', async () => {
     const routes = listApiRoutes(t.app).filter((route) => !SKIPPED.has(`${route.method} ${route.path}`));

@@ -1,16 +1,11 @@
 import { ApiClient } from './helpers/api-client';
 import { createFermenter, startBatch } from './helpers/batch-factory';
 import { createCatalogueEntries, sampleDesign } from './helpers/catalogue-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Batches API', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const signedIn = async (roles: ('member' | 'brewer' | 'admin')[] = ['member']) => {
     const user = await createUser(t.db, roles);

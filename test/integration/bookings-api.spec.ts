@@ -1,28 +1,15 @@
 import { DateTime } from 'luxon';
 import { ApiClient } from './helpers/api-client';
-import { givePaidUpDues } from './helpers/dues-factory';
+import { createPaidUpUser } from './helpers/dues-factory';
 import { createKitItem, wallClockFromToday } from './helpers/kit-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { testConfig, useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Bookings API', () => {
-  let t: TestApp;
-  let zone: string;
-  beforeAll(() => {
-    t = createTestApp();
-    zone = t.config.coopTimeZone;
-  });
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
+  const zone = testConfig().coopTimeZone;
 
-  const paidUp = async (roles: Parameters<typeof createUser>[1] = ['member']) => {
-    const user = await createUser(t.db, roles);
-    await givePaidUpDues(t.db, user.id);
-    return user;
-  };
-  const member = async () => ApiClient.signedIn(t.app, await paidUp());
+  const member = async () => ApiClient.signedIn(t.app, await createPaidUpUser(t.db));
   const day = (days: number, hour: number, minute = 0) => wallClockFromToday(zone, days, hour, minute);
 
   it('when a member books an item, then the booking keeps the wall-clock times and holds the turnaround after it', async () => {
@@ -141,7 +128,7 @@ describe('Bookings API', () => {
   it('when an admin books for a member, moves and blocks, then members cannot do the same', async () => {
     const item = await createKitItem(t.db);
     const admin = await ApiClient.signedIn(t.app, await createUser(t.db, ['member', 'admin']));
-    const person = await paidUp();
+    const person = await createPaidUpUser(t.db);
     const client = await ApiClient.signedIn(t.app, person);
 
     const forMember = await admin.send('post', '/api/bookings', { kitItemId: item.id, userId: person.id, start: day(40, 10), end: day(41, 10) });

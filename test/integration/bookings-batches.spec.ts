@@ -2,16 +2,11 @@ import { ApiClient } from './helpers/api-client';
 import { startBatch } from './helpers/batch-factory';
 import { givePaidUpDues } from './helpers/dues-factory';
 import { createKitItem, wallClockFromToday } from './helpers/kit-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Bookings API with batches', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   it('when a batch is fermenting in a fermenter, then bookings of it are refused naming the batch, except one serving that batch', async () => {
     const zone = t.config.coopTimeZone;

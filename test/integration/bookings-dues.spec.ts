@@ -1,26 +1,17 @@
 import { ApiClient } from './helpers/api-client';
-import { givePaidUpDues } from './helpers/dues-factory';
+import { createPaidUpUser, givePaidUpDues } from './helpers/dues-factory';
 import { createKitItem, wallClockFromToday } from './helpers/kit-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { testConfig, useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Bookings and dues', () => {
-  let t: TestApp;
-  let zone: string;
-  beforeAll(() => {
-    t = createTestApp();
-    zone = t.config.coopTimeZone;
-  });
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
+  const zone = testConfig().coopTimeZone;
   const day = (days: number, hour: number) => wallClockFromToday(zone, days, hour);
 
   it('when dues lapse, then a new booking is refused saying why and how to pay, and the booking made before stays', async () => {
     const item = await createKitItem(t.db);
-    const user = await createUser(t.db);
-    await givePaidUpDues(t.db, user.id);
+    const user = await createPaidUpUser(t.db);
     const client = await ApiClient.signedIn(t.app, user);
     const before = await client.send('post', '/api/bookings', { kitItemId: item.id, start: day(10, 9), end: day(11, 9) });
     await givePaidUpDues(t.db, user.id, -2);
@@ -52,8 +43,7 @@ describe('Bookings and dues', () => {
 
   it('when a member books, then a confirmation is queued with the booking; the day before, one reminder however often the job runs', async () => {
     const item = await createKitItem(t.db, { turnaroundHours: 12 });
-    const user = await createUser(t.db);
-    await givePaidUpDues(t.db, user.id);
+    const user = await createPaidUpUser(t.db);
     const client = await ApiClient.signedIn(t.app, user);
 
     const booked = await client.send('post', '/api/bookings', { kitItemId: item.id, start: day(1, 10), end: day(1, 18) });

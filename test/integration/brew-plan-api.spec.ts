@@ -1,25 +1,16 @@
 import { DateTime } from 'luxon';
 import { ApiClient } from './helpers/api-client';
 import { createAleRecipe, createSizedFermenter, mondayInWeeks } from './helpers/brew-plan-factory';
-import { givePaidUpDues } from './helpers/dues-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { createPaidUpUser } from './helpers/dues-factory';
+import { testConfig, useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Brew plan API', () => {
-  let t: TestApp;
-  let zone: string;
-  beforeAll(() => {
-    t = createTestApp();
-    zone = t.config.coopTimeZone;
-  });
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
+  const zone = testConfig().coopTimeZone;
 
   const brewer = async () => {
-    const user = await createUser(t.db, ['member', 'brewer']);
-    await givePaidUpDues(t.db, user.id);
+    const user = await createPaidUpUser(t.db, ['member', 'brewer']);
     return { user, client: await ApiClient.signedIn(t.app, user) };
   };
   const proposalsFor = (client: ApiClient, recipe: { id: number; version: number }, volumeLitres: number, wantedWeek: string) =>

@@ -1,15 +1,10 @@
 import { randomUUID } from 'node:crypto';
 import { ApiClient } from './helpers/api-client';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Ingredient catalogue, styles and brewhouse API', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const brewer = async () => ApiClient.signedIn(t.app, await createUser(t.db, ['member', 'brewer']));
   const member = async () => ApiClient.signedIn(t.app, await createUser(t.db));

@@ -1,16 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import { CATALOGUE_CSV_MAX_BYTES } from '@shared/recipes';
 import { ApiClient } from './helpers/api-client';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Catalogue CSV import', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const brewer = async () => ApiClient.signedIn(t.app, await createUser(t.db, ['member', 'brewer']));
   const tag = () => randomUUID().slice(0, 8);

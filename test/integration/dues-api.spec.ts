@@ -4,19 +4,14 @@ import { freePort } from '../../scripts/setup/free-port';
 import { ApiClient } from './helpers/api-client';
 import { attemptKey, createPlan, paidThroughOf } from './helpers/dues-factory';
 import { chargesOfMember, stripeFakeClient } from './helpers/stripe-fake-client';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { createTestApp, useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 const today = () => DateTime.now().setZone(process.env.COOP_TIME_ZONE ?? 'Europe/Berlin').toISODate()!;
 const plusMonthLessDay = (iso: string) => DateTime.fromISO(iso).plus({ months: 1 }).minus({ days: 1 }).toISODate();
 
 describe('Dues API against the Stripe fake', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const member = async () => {
     const user = await createUser(t.db, ['member']);

@@ -2,19 +2,14 @@ import { DateTime } from 'luxon';
 import { createDuesStanding } from '@server/dues';
 import { ApiClient } from './helpers/api-client';
 import { waitForMailTo } from './helpers/caught-mail';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 const zone = process.env.COOP_TIME_ZONE ?? 'Europe/Berlin';
 const day = (offset: number) => DateTime.now().setZone(zone).plus({ days: offset }).toISODate()!;
 
 describe('Dues standing and reminders', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
   const standing = () => createDuesStanding({ db: t.db, coopTimeZone: zone });
 
   it('when dues cover today, then the member may book', async () => {

@@ -1,16 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import { ApiClient } from './helpers/api-client';
 import { createKitItem } from './helpers/kit-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Kit API', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const admin = async () => ApiClient.signedIn(t.app, await createUser(t.db, ['member', 'admin']));
 

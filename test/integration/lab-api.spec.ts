@@ -1,15 +1,10 @@
 import { randomUUID } from 'node:crypto';
 import { ApiClient } from './helpers/api-client';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Lab API: tolerance classes', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const unique = (name: string) => `${name} ${randomUUID().slice(0, 8)}`;
 

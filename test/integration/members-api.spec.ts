@@ -2,16 +2,11 @@ import { createPasswordHasher } from '@server/auth';
 import { createInvitationsService } from '@server/invitations';
 import { createMembersService } from '@server/members';
 import { ApiClient } from './helpers/api-client';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Members API', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   async function adminClient() {
     const admin = await createUser(t.db, ['member', 'admin']);

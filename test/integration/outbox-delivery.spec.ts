@@ -6,7 +6,7 @@ import { givePaidUpDues } from './helpers/dues-factory';
 import { createKitItem, wallClockFromToday } from './helpers/kit-factory';
 import { caughtMailTo } from './helpers/caught-mail';
 import { startServerProcess } from './helpers/server-process';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { createTestApp, TestApp, useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 const pause = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
@@ -21,12 +21,7 @@ async function waitForState(t: TestApp, id: number, state: string, timeoutMs: nu
 }
 
 describe('Outbox delivery', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   it('when SMTP is down, then a booking confirmation waits in the outbox; once SMTP is back, two server processes deliver it exactly once', async () => {
     const catcher = await startMailCatcher({ smtpPort: 0, apiPort: 0 });

@@ -2,16 +2,11 @@ import { parse } from 'csv-parse/sync';
 import { DateTime } from 'luxon';
 import { ApiClient } from './helpers/api-client';
 import { startBatch } from './helpers/batch-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Production report API', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const admin = async () => ApiClient.signedIn(t.app, await createUser(t.db, ['member', 'admin']));
 

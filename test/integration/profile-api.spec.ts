@@ -1,14 +1,9 @@
 import { ApiClient } from './helpers/api-client';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser, TEST_PASSWORD } from './helpers/user-factory';
 
 describe('Profile API', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   it('when a person changes their name and units, then the profile and the session show them and the change is audited', async () => {
     const user = await createUser(t.db);

@@ -1,16 +1,11 @@
 import { predictRecipe } from '@shared/recipes';
 import { ApiClient } from './helpers/api-client';
 import { createCatalogueEntries, sampleDesign } from './helpers/catalogue-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Recipe versions as snapshots', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   async function recipeWithCatalogue() {
     const ids = await createCatalogueEntries(t.db);

@@ -1,15 +1,10 @@
 import { ApiClient } from './helpers/api-client';
 import { createCatalogueEntries, sampleDesign } from './helpers/catalogue-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Recipes API', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   async function memberWithCatalogue() {
     const ids = await createCatalogueEntries(t.db);

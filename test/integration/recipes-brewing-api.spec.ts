@@ -1,15 +1,10 @@
 import { ApiClient } from './helpers/api-client';
 import { createCatalogueEntries, sampleDesign } from './helpers/catalogue-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Recipes API, brewing rules', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   it('when a boil addition is longer than the boil, then it answers 400 naming the hop time and stores nothing', async () => {
     const ids = await createCatalogueEntries(t.db);

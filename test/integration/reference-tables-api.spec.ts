@@ -1,15 +1,10 @@
 import { ApiClient } from './helpers/api-client';
 import { densityTableCsv } from './helpers/density-table-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Reference tables API', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const brewer = async () => ApiClient.signedIn(t.app, await createUser(t.db, ['member', 'brewer']));
   const member = async () => ApiClient.signedIn(t.app, await createUser(t.db));

@@ -1,15 +1,10 @@
 import { ApiClient } from './helpers/api-client';
 import { createCatalogueEntries, sampleDesign } from './helpers/catalogue-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Request validation shared by every route', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   it.each(['0x10', '1e3', '1%20', '01', '+1'])('when an id is written %p, then it answers 400 and nothing is withdrawn', async (id) => {
     const admin = await ApiClient.signedIn(t.app, await createUser(t.db, ['member', 'admin']));

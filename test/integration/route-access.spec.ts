@@ -1,7 +1,7 @@
 import { ROLES } from '@shared/auth';
 import { ApiClient } from './helpers/api-client';
 import { listApiRoutes, samplePath } from './helpers/route-table';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 // The only routes an anonymous caller may reach. Adding a public route means adding it here, on purpose.
@@ -23,12 +23,7 @@ const TOKEN_ROUTES = ['POST /api/readings/push'];
 const STATE_CHANGING = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 
 describe('API route table', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const routes = () => listApiRoutes(t.app);
 

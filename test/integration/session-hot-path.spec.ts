@@ -1,16 +1,11 @@
 import { ApiClient } from './helpers/api-client';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 const FOURTEEN_DAYS_MS = 14 * 24 * 3600 * 1000;
 
 describe('Signed-in requests: session reads and expiry writes', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const sessionOf = (userId: number) => t.db('sessions').whereRaw("JSON_VALUE(sess, '$.passport.user') = ?", [String(userId)]).first('sid', 'expired');
   const setExpiry = (sid: string, fromNowMs: number) => t.db('sessions').where({ sid }).update({ expired: new Date(Date.now() + fromNowMs) });

@@ -2,7 +2,7 @@ import bcrypt from 'bcryptjs';
 import { createAuthService, createPasswordHasher } from '@server/auth';
 import { BcryptEngine } from '@server/auth/password-hasher';
 import { ApiClient } from './helpers/api-client';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { createTestApp, TestApp, useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Sign-in throttle', () => {
@@ -58,12 +58,7 @@ describe('Sign-in throttle', () => {
 });
 
 describe('Sign-in work for known and unknown e-mails', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   /** bcryptjs with a ledger of the work of each comparison: 2^cost rounds (Provos & Mazières, "A Future-Adaptable Password Scheme", 1999). */
   function countingEngine() {

@@ -1,17 +1,12 @@
 import { ApiClient } from './helpers/api-client';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 import { createStockRecipe, planBatch, receiveLot } from './helpers/stock-factory';
 
 // The sample recipe (20 L) uses 4.5 kg malt, 25 g hops, 1 pack of yeast and 1 fining tablet;
 // all stock figures here are invented for the tests.
 describe('Stock API', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const signedIn = async (roles: ('member' | 'brewer' | 'admin')[] = ['member', 'brewer']) => {
     const user = await createUser(t.db, roles);

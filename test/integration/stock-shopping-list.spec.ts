@@ -1,6 +1,6 @@
 import { parse } from 'csv-parse/sync';
 import { ApiClient } from './helpers/api-client';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 import { createStockRecipe, planBatch, receiveLot } from './helpers/stock-factory';
 
@@ -12,12 +12,7 @@ import { createStockRecipe, planBatch, receiveLot } from './helpers/stock-factor
 //   yeast  2 + ceil(0.5) = 3 packs, on hand 1          → buy 2
 //   fining 2 + ceil(0.5) = 3 tablets, on hand none     → buy 3
 describe('Shopping list', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   async function workedExample() {
     const user = await createUser(t.db, ['member', 'brewer']);

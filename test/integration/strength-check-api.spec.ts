@@ -2,16 +2,11 @@ import { randomUUID } from 'node:crypto';
 import { analyseDistillate, strengthBreakdown } from '@shared/science';
 import { ApiClient } from './helpers/api-client';
 import { readingBody, startBatch } from './helpers/batch-factory';
-import { createTestApp, TestApp } from './helpers/test-app';
+import { useTestApp } from './helpers/test-app';
 import { createUser } from './helpers/user-factory';
 
 describe('Strength check API', () => {
-  let t: TestApp;
-  beforeAll(() => (t = createTestApp()));
-  afterAll(async () => {
-    t.close();
-    await t.db.destroy();
-  });
+  const t = useTestApp();
 
   const client = async (roles: ('member' | 'brewer' | 'admin')[]) => ApiClient.signedIn(t.app, await createUser(t.db, roles));
   const brewDay = { preBoilLitres: null, preBoilGravity: null, fermenterLitres: null, originalGravity: 1.05, originalGravityTemperatureC: 20, pitchedAt: null };

@@ -1,6 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import { Knex } from 'knex';
+import { Role } from '@shared/auth';
 import { DuesPeriod } from '@shared/dues';
+import { createUser, TestUser } from './user-factory';
 
 /** A plan with a unique name, so each test owns its rows. */
 export async function createPlan(db: Knex, overrides: { amountCents?: number; period?: DuesPeriod } = {}): Promise<{ id: number; name: string; amountCents: number }> {
@@ -23,4 +25,11 @@ export async function paidThroughOf(db: Knex, userId: number): Promise<string | 
 export async function givePaidUpDues(db: Knex, userId: number, daysAhead = 60): Promise<void> {
   const paidThrough = new Date(Date.now() + daysAhead * 86_400_000).toISOString().slice(0, 10);
   await db('dues_memberships').insert({ user_id: userId, paid_through: paidThrough }).onConflict('user_id').merge();
+}
+
+/** A new person whose dues are paid well ahead. */
+export async function createPaidUpUser(db: Knex, roles: Role[] = ['member']): Promise<TestUser> {
+  const user = await createUser(db, roles);
+  await givePaidUpDues(db, user.id);
+  return user;
 }

@@ -22,11 +22,34 @@ export interface TestApp extends CreatedApp {
   config: Config;
 }
 
-export function createTestApp(
-  options: { db?: Knex; signInLimits?: SignInThrottleLimits; publicRequestLimit?: RateLimit; pushRateLimit?: PushRateLimit; env?: Record<string, string> } = {},
-): TestApp {
+/** What a test may change in the app: its database, limits and environment. */
+export interface TestAppOptions {
+  db?: Knex;
+  signInLimits?: SignInThrottleLimits;
+  publicRequestLimit?: RateLimit;
+  pushRateLimit?: PushRateLimit;
+  env?: Record<string, string>;
+}
+
+export function createTestApp(options: TestAppOptions = {}): TestApp {
   const config = options.env ? { ...loadConfig({ ...process.env, ...options.env }), trustProxy: 1 } : testConfig();
   const db = options.db ?? createDb(config.db);
   const created = createApp({ config, db, signInLimits: options.signInLimits, publicRequestLimit: options.publicRequestLimit, pushRateLimit: options.pushRateLimit, sessionCleanupMs: 0 });
   return { ...created, db, config };
+}
+
+/**
+ * The real app for one spec file: made before its tests, closed with its database after them.
+ * The handle is filled in by `beforeAll`, so read it only inside hooks and tests.
+ */
+export function useTestApp(options: TestAppOptions = {}): TestApp {
+  const handle = {} as TestApp;
+  beforeAll(() => {
+    Object.assign(handle, createTestApp(options));
+  });
+  afterAll(async () => {
+    handle.close();
+    await handle.db.destroy();
+  });
+  return handle;
 }
