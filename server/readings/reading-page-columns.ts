@@ -16,9 +16,12 @@ const num = (v: string | null) => (v === null ? null : Number(v));
 /** Rows into the columns the API sends. */
 export function toReadingColumns(rows: readonly PageReadingRow[], names: ReadingSourceNames): ReadingColumns {
   const c = emptyReadingColumns();
+  let measured = 0;
+  let updated = 0;
   for (const r of rows) {
     c.id.push(r.id);
-    c.measuredAt.push(r.measured_at_s * 1000);
+    c.measuredAt.push(r.measured_at_s - measured);
+    measured = r.measured_at_s;
     c.instrument.push(r.instrument);
     c.rawValue.push(Number(r.raw_value));
     c.rawUnit.push(r.raw_unit);
@@ -31,7 +34,8 @@ export function toReadingColumns(rows: readonly PageReadingRow[], names: Reading
     c.sourceDetail.push((r.upload_id !== null ? names.uploads.get(r.upload_id) : r.push_token_id !== null ? names.tokens.get(r.push_token_id) : null) ?? null);
     c.note.push(r.note);
     c.createdByName.push(r.created_by_user_id === null ? null : (names.users.get(r.created_by_user_id) ?? null));
-    c.updatedAt.push(r.updated_at_s * 1000);
+    c.updatedAt.push(r.updated_at_s - updated);
+    updated = r.updated_at_s;
   }
   return c;
 }

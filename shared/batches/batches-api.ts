@@ -14,7 +14,7 @@ export const BATCHES_PATH = '/api/batches';
  *   POST   /api/batches/:batchId/status                 [editor]  MoveBatchRequest → Batch (409 status-skips-steps unless confirmed)
  *   PUT    /api/batches/:batchId/brew-day               [editor]  BrewDayMeasurements → Batch
  *   POST   /api/batches/:batchId/correction-factor      [editor]  CorrectionFactorRequest → Batch (refractometer readings recomputed)
- *   GET    /api/batches/:batchId/readings               [any]  ReadingPage (?offset&limit&sort&direction)
+ *   GET    /api/batches/:batchId/readings               [any]  ReadingPage, column by column (?offset&limit&sort&direction)
  *   POST   /api/batches/:batchId/readings               [editor]  ReadingInput → GravityReading (201)
  *   POST   /api/batches/:batchId/readings/import        [editor]  multipart: file, mode, dryRun → ReadingImportResult
  *   GET    /api/batches/:batchId/readings/export        [any]  text/csv

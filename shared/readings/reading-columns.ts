@@ -3,7 +3,8 @@ import { GravityReading, GravityUnit, Instrument, ReadingSource } from './gravit
 /**
  * A page of readings column by column. A logger writes tens of thousands of rows per batch, and one
  * array per field instead of one object per row keeps the response about a fifth of the size and
- * cheap to write and read. Times are epoch milliseconds.
+ * cheap to write and read. Times are whole seconds since 1970, each written as its difference from
+ * the one before (the first as it is): a logger's rows a few minutes apart then cost a few digits.
  */
 export interface ReadingColumns {
   id: number[];
@@ -33,10 +34,12 @@ export function emptyReadingColumns(): ReadingColumns {
 
 /** The readings of a page as one object each, for the table and the forms. */
 export function readingsFromColumns(batchId: number, c: ReadingColumns): GravityReading[] {
+  let measured = 0;
+  let updated = 0;
   return c.id.map((id, i) => ({
     id,
     batchId,
-    measuredAt: new Date(c.measuredAt[i]).toISOString(),
+    measuredAt: new Date((measured += c.measuredAt[i]) * 1000).toISOString(),
     instrument: c.instrument[i],
     rawValue: c.rawValue[i],
     rawUnit: c.rawUnit[i],
@@ -49,6 +52,6 @@ export function readingsFromColumns(batchId: number, c: ReadingColumns): Gravity
     sourceDetail: c.sourceDetail[i],
     note: c.note[i],
     createdByName: c.createdByName[i],
-    updatedAt: new Date(c.updatedAt[i]).toISOString(),
+    updatedAt: new Date((updated += c.updatedAt[i]) * 1000).toISOString(),
   }));
 }
