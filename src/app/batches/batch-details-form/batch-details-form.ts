@@ -1,20 +1,19 @@
 import { ChangeDetectionStrategy, Component, effect, inject, input, output, untracked } from '@angular/core';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { MatDatepicker, MatDatepickerInput, MatDatepickerToggle } from '@angular/material/datepicker';
-import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
-import { MatInput } from '@angular/material/input';
+import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { DateTime } from 'luxon';
-import { Batch, BATCH_LIMITS, BrewerChoice, FermenterChoice, UpdateBatchRequest } from '@shared/batches';
+import { Batch, BrewerChoice, FermenterChoice, UpdateBatchRequest } from '@shared/batches';
 import { applyServerFieldErrors } from '@app/ui/server-field-errors';
+import { batchFieldControls } from '../batch-fields/batch-field-controls';
+import { BatchFields } from '../batch-fields/batch-fields';
 
 /** The batch's details as its editors change them: name, brewer, brew day, planned volume, fermenter, notes. Only changed fields are sent. */
 @Component({
   selector: 'cw-batch-details-form',
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatInput, MatError, MatHint, MatSuffix, MatSelect, MatOption, MatButton, MatDatepicker, MatDatepickerInput, MatDatepickerToggle],
+  imports: [ReactiveFormsModule, BatchFields, MatFormField, MatLabel, MatHint, MatSelect, MatOption, MatButton],
   templateUrl: './batch-details-form.html',
-  styles: `.row { display: flex; flex-wrap: wrap; gap: 0 12px; } .row mat-form-field { flex: 1 1 180px; }`,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class BatchDetailsForm {
@@ -27,15 +26,8 @@ export class BatchDetailsForm {
   readonly saved = output<UpdateBatchRequest>();
   readonly cancelled = output<void>();
 
-  protected readonly limits = BATCH_LIMITS;
-  protected readonly form = inject(NonNullableFormBuilder).group({
-    name: ['', [Validators.required, Validators.maxLength(BATCH_LIMITS.nameMaxLength)]],
-    brewerId: [0],
-    brewDate: [null as DateTime | null, Validators.required],
-    plannedVolumeLitres: [20, [Validators.required, Validators.min(BATCH_LIMITS.volumeLitres.min), Validators.max(BATCH_LIMITS.volumeLitres.max)]],
-    fermenterId: [null as number | null],
-    notes: ['', Validators.maxLength(BATCH_LIMITS.notesMaxLength)],
-  });
+  private readonly fb = inject(NonNullableFormBuilder);
+  protected readonly form = this.fb.group({ ...batchFieldControls(this.fb, null), brewerId: this.fb.control(0) });
 
   constructor() {
     effect(() => applyServerFieldErrors(this.form, this.serverErrors()));

@@ -1,20 +1,20 @@
 import { ChangeDetectionStrategy, Component, effect, inject, input, output } from '@angular/core';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { KeyValuePipe } from '@angular/common';
+import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { MatDatepicker, MatDatepickerInput, MatDatepickerToggle } from '@angular/material/datepicker';
-import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
-import { MatInput } from '@angular/material/input';
+import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { DateTime } from 'luxon';
-import { BATCH_LIMITS, CreateBatchRequest, FermenterChoice } from '@shared/batches';
+import { CreateBatchRequest, FermenterChoice } from '@shared/batches';
 import { RecipeSummary, RecipeVersionSummary } from '@shared/recipes';
 import { applyServerFieldErrors } from '@app/ui/server-field-errors';
-import { KeyValuePipe } from '@angular/common';
+import { batchFieldControls } from '../batch-fields/batch-field-controls';
+import { BatchFields } from '../batch-fields/batch-fields';
 
 /** Starts a batch: from a recipe version or none, with brew day, planned volume and fermenter. */
 @Component({
   selector: 'cw-batch-start-form',
-  imports: [KeyValuePipe, ReactiveFormsModule, MatFormField, MatLabel, MatInput, MatError, MatHint, MatSuffix, MatSelect, MatOption, MatButton, MatDatepicker, MatDatepickerInput, MatDatepickerToggle],
+  imports: [KeyValuePipe, ReactiveFormsModule, BatchFields, MatFormField, MatLabel, MatHint, MatSelect, MatOption, MatButton],
   templateUrl: './batch-start-form.html',
   styleUrl: './batch-start-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -30,15 +30,11 @@ export class BatchStartForm {
   readonly recipeChosen = output<number>();
   readonly started = output<CreateBatchRequest>();
 
-  protected readonly limits = BATCH_LIMITS;
-  protected readonly form = inject(NonNullableFormBuilder).group({
-    recipeId: [null as number | null],
-    recipeVersion: [null as number | null],
-    name: ['', [Validators.required, Validators.maxLength(BATCH_LIMITS.nameMaxLength)]],
-    brewDate: [DateTime.now() as DateTime | null, Validators.required],
-    plannedVolumeLitres: [20, [Validators.required, Validators.min(BATCH_LIMITS.volumeLitres.min), Validators.max(BATCH_LIMITS.volumeLitres.max)]],
-    fermenterId: [null as number | null],
-    notes: ['', Validators.maxLength(BATCH_LIMITS.notesMaxLength)],
+  private readonly fb = inject(NonNullableFormBuilder);
+  protected readonly form = this.fb.group({
+    recipeId: this.fb.control<number | null>(null),
+    recipeVersion: this.fb.control<number | null>(null),
+    ...batchFieldControls(this.fb, DateTime.now()),
   });
 
   constructor() {

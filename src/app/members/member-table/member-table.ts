@@ -4,7 +4,8 @@ import { MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { Role, ROLES } from '@shared/auth';
 import { Member } from '@shared/members';
-import { ariaSort, nextSort, sortRows, TableSort } from '@app/ui/table-sort/table-sort';
+import { SortHeader } from '@app/ui/sort-header/sort-header';
+import { sortRows, TableSort } from '@app/ui/table-sort/table-sort';
 
 /** A role change asked for on one member. */
 export interface RolesChange {
@@ -31,7 +32,7 @@ const valueOf = (member: Member, column: string): string =>
 /** The people of the co-op with their roles, state and the officer's actions on them. */
 @Component({
   selector: 'cw-member-table',
-  imports: [MatButton, MatIcon, ZonedDateTimePipe],
+  imports: [SortHeader, MatButton, MatIcon, ZonedDateTimePipe],
   templateUrl: './member-table.html',
   styleUrl: './member-table.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -48,7 +49,6 @@ export class MemberTable {
   readonly sort = model<TableSort<MemberColumn>>({ column: 'name', direction: 'asc' });
 
   protected readonly sortable = SORTABLE;
-  protected readonly ariaSort = (column: MemberColumn) => ariaSort(this.sort(), column);
 
   protected readonly rows = computed(() => {
     const saving = this.savingMemberIds();
@@ -64,10 +64,6 @@ export class MemberTable {
       })),
     }));
   });
-
-  protected sortBy(column: MemberColumn): void {
-    this.sort.set(nextSort(this.sort(), column));
-  }
 
   protected toggleRole(member: Member, role: Role): void {
     const roles = member.roles.includes(role)

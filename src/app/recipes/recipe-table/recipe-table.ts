@@ -1,8 +1,8 @@
 import { ChangeDetectionStrategy, Component, computed, input, model } from '@angular/core';
-import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { RecipeSummary } from '@shared/recipes';
-import { ariaSort, nextSort, sortRows, TableSort } from '@app/ui/table-sort/table-sort';
+import { SortHeader } from '@app/ui/sort-header/sort-header';
+import { sortRows, TableSort } from '@app/ui/table-sort/table-sort';
 import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 
 /** A recipe row with the name of its style target and its volume in the person's units. */
@@ -36,7 +36,7 @@ function valueOf(recipe: RecipeListRow, column: string): string | number | null 
 /** The recipes the person can see, sortable by any column; a list of cards on a phone. */
 @Component({
   selector: 'cw-recipe-table',
-  imports: [RouterLink, MatIcon, ZonedDateTimePipe],
+  imports: [SortHeader, RouterLink, ZonedDateTimePipe],
   templateUrl: './recipe-table.html',
   styleUrl: './recipe-table.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -51,9 +51,4 @@ export class RecipeTable {
 
   protected readonly columns = COLUMNS;
   protected readonly sorted = computed(() => sortRows(this.recipes(), this.sort(), valueOf));
-  protected readonly ariaSort = (column: RecipeColumn) => ariaSort(this.sort(), column);
-
-  protected sortBy(column: RecipeColumn): void {
-    this.sort.set(nextSort(this.sort(), column));
-  }
 }

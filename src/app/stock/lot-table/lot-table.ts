@@ -1,9 +1,9 @@
 import { ChangeDetectionStrategy, Component, computed, input, model, output } from '@angular/core';
 import { MatButton } from '@angular/material/button';
-import { MatIcon } from '@angular/material/icon';
 import { UnitSystem } from '@shared/recipes';
 import { stockAmountText, StockLot } from '@shared/stock';
-import { ariaSort, nextSort, sortRows, TableSort } from '@app/ui/table-sort/table-sort';
+import { SortHeader } from '@app/ui/sort-header/sort-header';
+import { sortRows, TableSort } from '@app/ui/table-sort/table-sort';
 
 export type LotColumn = 'ingredientName' | 'onHand' | 'receivedOn' | 'bestBefore';
 
@@ -22,7 +22,7 @@ const valueOf = (lot: StockLot, column: string): string | number | null =>
 /** The lots with what is left of each; at phone width each lot is a card. */
 @Component({
   selector: 'cw-lot-table',
-  imports: [MatButton, MatIcon],
+  imports: [SortHeader, MatButton],
   templateUrl: './lot-table.html',
   styleUrl: './lot-table.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -40,7 +40,6 @@ export class LotTable {
 
   protected readonly sortable = SORTABLE;
   protected readonly kindLabels = KIND_LABELS;
-  protected readonly ariaSort = (column: LotColumn) => ariaSort(this.sort(), column);
   protected readonly rows = computed(() =>
     sortRows(this.lots(), this.sort(), valueOf).map((lot) => ({
       lot,
@@ -48,8 +47,4 @@ export class LotTable {
       received: stockAmountText(lot.ingredientKind, lot.unit, lot.receivedQuantity, this.unitSystem()),
     })),
   );
-
-  protected sortBy(column: LotColumn): void {
-    this.sort.set(nextSort(this.sort(), column));
-  }
 }
