@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
-import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
+import { AbstractControl, FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogActions, MatDialogClose, MatDialogContent, MatDialogRef, MatDialogTitle } from '@angular/material/dialog';
 import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
@@ -42,7 +42,14 @@ export class AdjustLotDialog {
   protected readonly reason = toSignal(this.form.controls.reason.valueChanges, { initialValue: this.form.controls.reason.value });
 
   constructor() {
-    this.form.controls.amount.addValidators(stockQuantityValidator(() => this.form.controls.entryUnit.value, true));
+    // "Other" takes a signed change: its size is checked against the limit, its sign says the way.
+    const withinLimit = stockQuantityValidator(() => this.form.controls.entryUnit.value, true);
+    this.form.controls.amount.addValidators((control) => {
+      const value = control.value as number | null;
+      const signed = this.form.controls.reason.value === 'other' && typeof value === 'number';
+      return withinLimit(signed ? ({ value: Math.abs(value) } as AbstractControl) : control);
+    });
+    this.form.controls.reason.valueChanges.pipe(takeUntilDestroyed()).subscribe(() => this.form.controls.amount.updateValueAndValidity());
   }
 
   protected amountLabel(reason: AdjustmentReason): string {
@@ -60,6 +67,13 @@ export class AdjustLotDialog {
       return;
     }
     const quantity = toStockQuantity(Math.abs(amount), entryUnit).quantity;
+    const takesOut = reason !== 'count' && (reason !== 'other' || amount < 0);
+    // The server refuses it too (and under a race), but here the typed figures stay in the form.
+    if (takesOut && quantity > this.data.lot.onHand + 1e-9) {
+      this.form.controls.amount.setErrors({ beyondOnHand: true });
+      this.form.markAllAsTouched();
+      return;
+    }
     if (reason === 'count') this.ref.close({ reason, countedQuantity: quantity, note: note.trim() });
     else this.ref.close({ reason, change: reason === 'other' && amount > 0 ? quantity : -quantity, note: note.trim() });
   }
