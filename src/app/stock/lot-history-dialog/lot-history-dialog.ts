@@ -1,14 +1,16 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogActions, MatDialogClose, MatDialogContent, MatDialogTitle } from '@angular/material/dialog';
 import { UnitSystem } from '@shared/recipes';
 import { ADJUSTMENT_REASON_LABELS, stockAmountText, StockLot, StockMovement } from '@shared/stock';
+import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 
 export interface LotHistoryDialogData {
   lot: StockLot;
   movements: StockMovement[];
   unitSystem: UnitSystem;
+  /** The co-op's zone: every movement reads on its clocks. */
+  timeZone: string;
 }
 
 const KIND_LABELS = { receipt: 'Received', draw: 'Drawn', adjustment: 'Adjusted' } as const;
@@ -16,7 +18,7 @@ const KIND_LABELS = { receipt: 'Received', draw: 'Drawn', adjustment: 'Adjusted'
 /** Every movement of one lot, oldest first, as recorded (none is ever rewritten). */
 @Component({
   selector: 'cw-lot-history-dialog',
-  imports: [DatePipe, MatDialogTitle, MatDialogContent, MatDialogActions, MatDialogClose, MatButton],
+  imports: [ZonedDateTimePipe, MatDialogTitle, MatDialogContent, MatDialogActions, MatDialogClose, MatButton],
   template: `
     <h2 mat-dialog-title>History of lot {{ data.lot.id }}: {{ data.lot.ingredientName }}</h2>
     <mat-dialog-content>
@@ -25,7 +27,7 @@ const KIND_LABELS = { receipt: 'Received', draw: 'Drawn', adjustment: 'Adjusted'
           <li>
             <strong>{{ row.kind }} {{ row.change }}</strong>, leaving {{ row.after }}
             <span class="meta">
-              {{ row.movement.createdAt | date: 'medium' }} · {{ row.movement.byName }}
+              {{ row.movement.createdAt | cwZonedDateTime: data.timeZone }} · {{ row.movement.byName }}
               @if (row.movement.batchId !== null) {
                 · for {{ row.movement.batchName }}
               }

@@ -5,6 +5,7 @@ import { Store } from '@ngrx/store';
 import { catchError, EMPTY, exhaustMap, filter, map, of, switchMap, withLatestFrom } from 'rxjs';
 import { AdjustLotRequest, ReceiveLotRequest, ReorderLevelRequest } from '@shared/stock';
 import { apiErrorMessage } from '@app/core/api-error-message';
+import { authFeature } from '@app/auth/state/auth.feature';
 import { AdjustLotDialog, AdjustLotDialogData } from '../adjust-lot-dialog/adjust-lot-dialog';
 import { ReceiveLotDialog, ReceiveLotDialogData } from '../receive-lot-dialog/receive-lot-dialog';
 import { ReorderLevelDialog } from '../reorder-level-dialog/reorder-level-dialog';
@@ -104,11 +105,11 @@ export const showLotHistory = createEffect(
   (actions$ = inject(Actions), dialog = inject(MatDialog), client = inject(StockClient), store = inject(Store)) =>
     actions$.pipe(
       ofType(StockPageActions.historyClicked),
-      withLatestFrom(store.select(stockFeature.selectUnitSystem)),
-      exhaustMap(([{ lot }, unitSystem]) =>
+      withLatestFrom(store.select(stockFeature.selectUnitSystem), store.select(authFeature.selectCoopTimeZone)),
+      exhaustMap(([{ lot }, unitSystem, timeZone]) =>
         client.movements(lot.id).pipe(
           switchMap((movements) => {
-            dialog.open<LotHistoryDialog, LotHistoryDialogData>(LotHistoryDialog, { ...DIALOG, data: { lot, movements, unitSystem } });
+            dialog.open<LotHistoryDialog, LotHistoryDialogData>(LotHistoryDialog, { ...DIALOG, data: { lot, movements, unitSystem, timeZone } });
             return EMPTY;
           }),
           catchError(failed('The lot’s history could not be loaded.')),
