@@ -59,6 +59,22 @@ describe('Batches API', () => {
     expect(audit).toHaveLength(1);
   });
 
+  it('when a move is dated before the current status was reached or in the future, then it answers 400 naming at and keeps the batch as it was', async () => {
+    const { client } = await signedIn();
+    const batch = await startBatch(client);
+    await client.send('post', `/api/batches/${batch.id}/status`, { status: 'brewing', at: '2026-11-20T08:00:00Z' });
+    const tooEarly = await client.send('post', `/api/batches/${batch.id}/status`, { status: 'fermenting', at: '2026-11-19T08:00:00Z' });
+    expect(tooEarly.status).toBe(400);
+    expect(tooEarly.body.fields.at).toMatch(/before the batch became brewing/);
+    const future = new Date(Date.now() + 24 * 3600_000).toISOString();
+    const tooLate = await client.send('post', `/api/batches/${batch.id}/status`, { status: 'fermenting', at: future });
+    expect(tooLate.status).toBe(400);
+    expect(tooLate.body.fields.at).toBe('must not be in the future');
+    const row = await t.db('batches').where({ id: batch.id }).first();
+    expect(row?.status).toBe('brewing');
+    expect(row?.fermenting_at).toBeNull();
+  });
+
   it('when a second batch moves into a fermenter another batch is fermenting in, then it answers 409', async () => {
     const { client } = await signedIn();
     const fermenterId = await createFermenter(t.db);
