@@ -13,33 +13,18 @@ import {
 } from '@shared/recipes';
 import { recordAudit } from '../audit/audit-log';
 import { AppError, forbidden } from '../errors/app-error';
+import { createRecipeAccess } from './recipe-access';
 import { assertReferencesExist } from './recipe-references';
 import { fromRecipeFile, toRecipeFile } from './recipe-file';
 import { snapshotFor } from './recipe-snapshot';
 import { predictVersion } from './version-prediction';
 import { SavedVersionWithPredictions, withPredictions } from './saved-version';
 import { sameVersion, toRecipe, toSummary } from './recipe-dto';
-import { RecipeRecord, recipesRepository, StoredVersion } from './recipes.repository';
-
-const recipeNotFound = () => new AppError('recipe-not-found', 'No recipe you can see has this id.', 404);
-const archived = () => new AppError('recipe-archived', 'This recipe is archived; restore it before editing.', 409);
+import { recipesRepository, StoredVersion } from './recipes.repository';
 
 /** Recipes: owners edit their own; co-op-visible ones are read and cloned by all; admins may archive any. */
 export function createRecipesService(db: Knex) {
-  /** The recipe when the caller may see it; someone else's private recipe is reported as not found. */
-  async function visible(user: SessionUser, id: number): Promise<RecipeRecord> {
-    const row = await recipesRepository.findById(db, id);
-    const mayView = row && (row.owner_user_id === user.id || row.visibility === 'coop' || user.roles.includes('admin'));
-    if (!mayView) throw recipeNotFound();
-    return row;
-  }
-
-  async function owned(user: SessionUser, id: number): Promise<RecipeRecord> {
-    const row = await visible(user, id);
-    if (row.owner_user_id !== user.id) throw forbidden('Only the owner may change this recipe; clone it to make your own.');
-    if (row.archived_at) throw archived();
-    return row;
-  }
+  const { visible, owned } = createRecipeAccess(db);
 
   async function create(user: SessionUser, stored: StoredVersion, visibility: RecipeVisibility, clonedFrom?: number): Promise<Recipe> {
     const id = await db.transaction(async (trx) => {
