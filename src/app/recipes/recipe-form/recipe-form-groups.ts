@@ -1,5 +1,5 @@
 import { AbstractControl, FormControl, FormGroup, NonNullableFormBuilder, ValidationErrors, ValidatorFn, Validators } from '@angular/forms';
-import { HopUse, hopTimeProblem, OtherUnit, RECIPE_LIMITS, RecipeQuantity, toDisplayUnits, UnitSystem } from '@shared/recipes';
+import { HopUse, hopTimeProblem, NAME_MAX_LENGTH, OtherUnit, RECIPE_LIMITS, RecipeQuantity, toDisplayUnits, UnitSystem } from '@shared/recipes';
 import { RecipeFormValue } from '../view-models/recipe-form-model';
 
 const L = RECIPE_LIMITS;
@@ -79,3 +79,22 @@ export function recipeRowGroups(fb: NonNullableFormBuilder, boilMinutes: () => n
     },
   };
 }
+
+/** The whole recipe form: its fields with their validators and one empty row of each kind. */
+export function recipeFormGroup(fb: NonNullableFormBuilder, rows: ReturnType<typeof recipeRowGroups>) {
+  return fb.group({
+    name: ['', [Validators.required, Validators.maxLength(NAME_MAX_LENGTH)]],
+    styleId: fb.control<number | null>(null),
+    batchVolume: fb.control<number | null>(null),
+    mashEfficiencyPercent: fb.control<number | null>(null, [Validators.required, Validators.min(L.mashEfficiencyPercent.min), Validators.max(L.mashEfficiencyPercent.max)]),
+    boilMinutes: fb.control<number | null>(null, [Validators.required, Validators.min(L.boilMinutes.min), Validators.max(MAX_MINUTES)]),
+    yeastId: fb.control<number | null>(null),
+    notes: ['', Validators.maxLength(L.notesLength)],
+    fermentables: fb.array([rows.fermentable('metric')]),
+    hops: fb.array([rows.hop('metric')]),
+    mashSteps: fb.array([rows.mashStep({ name: '', temperature: null, minutes: null }, 'metric')]),
+    others: fb.array([rows.other()]),
+  });
+}
+
+export type RecipeFormGroup = ReturnType<typeof recipeFormGroup>;

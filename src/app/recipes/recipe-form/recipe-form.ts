@@ -5,13 +5,14 @@ import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
-import { IngredientCatalogue, NAME_MAX_LENGTH, RECIPE_LIMITS, RecipeDesign, StyleTarget, unitLabel, UnitSystem } from '@shared/recipes';
+import { IngredientCatalogue, RECIPE_LIMITS, RecipeDesign, StyleTarget, unitLabel, UnitSystem } from '@shared/recipes';
 import { FermentableRows } from '../fermentable-rows/fermentable-rows';
 import { HopRows } from '../hop-rows/hop-rows';
 import { MashStepRows } from '../mash-step-rows/mash-step-rows';
 import { OtherRows } from '../other-rows/other-rows';
-import { limitIn, MAX_MINUTES, minimumIn, recipeRowGroups, SI_LIMITS } from './recipe-form-groups';
+import { limitIn, minimumIn, recipeFormGroup, recipeRowGroups, SI_LIMITS } from './recipe-form-groups';
 import { ExactAmounts } from './exact-amounts';
+import { rememberDesignAmounts, withExactAmounts } from './exact-design';
 import { designToFormValue, formValueToDesign } from '../view-models/recipe-form-model';
 
 /** The recipe as a reactive form in the person's units; emits the design (SI) as it is typed. */
@@ -39,23 +40,7 @@ export class RecipeForm {
   readonly edited = output<void>();
 
   protected readonly rows = recipeRowGroups(this.fb, () => this.form?.controls.boilMinutes.value ?? null);
-  protected readonly form = this.fb.group({
-    name: ['', [Validators.required, Validators.maxLength(NAME_MAX_LENGTH)]],
-    styleId: this.fb.control<number | null>(null),
-    batchVolume: this.fb.control<number | null>(null),
-    mashEfficiencyPercent: this.fb.control<number | null>(null, [
-      Validators.required,
-      Validators.min(RECIPE_LIMITS.mashEfficiencyPercent.min),
-      Validators.max(RECIPE_LIMITS.mashEfficiencyPercent.max),
-    ]),
-    boilMinutes: this.fb.control<number | null>(null, [Validators.required, Validators.min(RECIPE_LIMITS.boilMinutes.min), Validators.max(MAX_MINUTES)]),
-    yeastId: this.fb.control<number | null>(null),
-    notes: ['', Validators.maxLength(RECIPE_LIMITS.notesLength)],
-    fermentables: this.fb.array([this.rows.fermentable('metric')]),
-    hops: this.fb.array([this.rows.hop('metric')]),
-    mashSteps: this.fb.array([this.rows.mashStep({ name: '', temperature: null, minutes: null }, 'metric')]),
-    others: this.fb.array([this.rows.other()]),
-  });
+  protected readonly form = recipeFormGroup(this.fb, this.rows);
   private shownSystem: UnitSystem = 'metric';
   private readonly exact = new ExactAmounts();
 
@@ -137,31 +122,12 @@ export class RecipeForm {
     if (editable) this.form.enable({ emitEvent: false });
     else this.form.disable({ emitEvent: false });
     if (!typed) this.form.markAsPristine();
-    this.rememberStoredValues(source);
-  }
-
-  private rememberStoredValues(design: RecipeDesign): void {
-    const { controls } = this.form;
-    this.exact.remember(controls.batchVolume, design.batchVolumeLitres);
-    design.fermentables.forEach((item, index) => this.exact.remember(controls.fermentables.at(index).controls.amount, item.amountKg));
-    design.hops.forEach((item, index) => this.exact.remember(controls.hops.at(index).controls.amount, item.amountGrams));
-    design.mashSteps.forEach((step, index) => this.exact.remember(controls.mashSteps.at(index).controls.temperature, step.temperatureC));
+    rememberDesignAmounts(this.exact, this.form.controls, source);
   }
 
   /** The form as a design in SI units, untouched converted fields at their stored values; `keep` picks the rows. */
   private designFromForm(keep: (array: FormArray, index: number) => boolean = () => true): RecipeDesign {
-    const { controls } = this.form;
-    const design = formValueToDesign(this.form.getRawValue(), this.shownSystem);
-    const rows = <T>(array: FormArray, items: T[], exact: (item: T, index: number) => T) =>
-      items.map(exact).filter((_item, index) => keep(array, index));
-    return {
-      ...design,
-      batchVolumeLitres: this.exact.si(controls.batchVolume, design.batchVolumeLitres),
-      fermentables: rows(controls.fermentables, design.fermentables, (item, i) => ({ ...item, amountKg: this.exact.si(controls.fermentables.at(i).controls.amount, item.amountKg) })),
-      hops: rows(controls.hops, design.hops, (item, i) => ({ ...item, amountGrams: this.exact.si(controls.hops.at(i).controls.amount, item.amountGrams) })),
-      mashSteps: rows(controls.mashSteps, design.mashSteps, (step, i) => ({ ...step, temperatureC: this.exact.si(controls.mashSteps.at(i).controls.temperature, step.temperatureC) })),
-      others: rows(controls.others, design.others, (item) => item),
-    };
+    return withExactAmounts(this.exact, this.form.controls, formValueToDesign(this.form.getRawValue(), this.shownSystem), keep);
   }
 
   /** The design as typed so far: half-filled rows are left out, so the predictions follow every keystroke. */
