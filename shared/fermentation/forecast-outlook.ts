@@ -2,15 +2,7 @@ import { FermentationForecast, forecastFermentation, NoForecast } from './fermen
 
 /** A forecast as a list shows it: final gravity and finish (epoch ms) with their 95 % bands, or why there is none yet. */
 export type ForecastOutlook =
-  | {
-      status: 'forecast';
-      finalGravity: number;
-      finalGravityLow: number;
-      finalGravityHigh: number;
-      finishTime: number;
-      finishTimeEarly: number;
-      finishTimeLate: number;
-    }
+  | Pick<FermentationForecast, 'status' | 'finalGravity' | 'finalGravityLow' | 'finalGravityHigh' | 'finishTime' | 'finishTimeEarly' | 'finishTimeLate'>
   | Omit<NoForecast, 'readingsUsed'>;
 
 /**

@@ -15,7 +15,8 @@ import { BatchFieldControls } from './batch-field-controls';
   selector: 'cw-batch-fields',
   imports: [ReactiveFormsModule, MatFormField, MatLabel, MatInput, MatError, MatHint, MatSuffix, MatSelect, MatOption, MatDatepicker, MatDatepickerInput, MatDatepickerToggle],
   templateUrl: './batch-fields.html',
-  styleUrl: './batch-fields.scss',
+  // Its fields stand in the enclosing form's column as if written there.
+  styles: ':host { display: contents; }',
   // The fields join the form group of the component that holds them.
   viewProviders: [{ provide: ControlContainer, useFactory: () => inject(ControlContainer, { skipSelf: true }) }],
   changeDetection: ChangeDetectionStrategy.OnPush,

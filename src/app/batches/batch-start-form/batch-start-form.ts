@@ -16,7 +16,6 @@ import { BatchFields } from '../batch-fields/batch-fields';
   selector: 'cw-batch-start-form',
   imports: [KeyValuePipe, ReactiveFormsModule, BatchFields, MatFormField, MatLabel, MatHint, MatSelect, MatOption, MatButton],
   templateUrl: './batch-start-form.html',
-  styleUrl: './batch-start-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class BatchStartForm {

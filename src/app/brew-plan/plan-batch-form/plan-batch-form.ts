@@ -11,6 +11,7 @@ import { BATCH_LIMITS } from '@shared/batches';
 import { BREW_PLAN_LIMITS, ProposalRequest } from '@shared/brew-plan';
 import { RecipeSummary } from '@shared/recipes';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
+import { onCountChange } from '@app/ui/on-count-change';
 
 /** What the brewer asks the planner for, with the name the batch will carry. */
 export interface PlanRequest {
@@ -57,11 +58,7 @@ export class PlanBatchForm {
   constructor() {
     effect(() => applyServerFieldErrors(this.form, this.fieldErrors()));
     effect(() => this.form.controls.recipeVersion.setValue(this.versions()[0] ?? null));
-    let seen = this.acceptedCount();
-    effect(() => {
-      const count = this.acceptedCount();
-      if (count === seen) return;
-      seen = count;
+    onCountChange(this.acceptedCount, () => {
       this.form.patchValue({ name: '', fermentationDays: null, conditioningDays: null });
       this.form.markAsUntouched();
     });

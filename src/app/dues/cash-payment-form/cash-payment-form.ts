@@ -1,10 +1,11 @@
-import { ChangeDetectionStrategy, Component, effect, inject, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, input, output } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { describePlanPrice, DUES_LIMITS, DuesLedgerMember, DuesPlan, RecordCashPaymentRequest } from '@shared/dues';
+import { onCountChange } from '@app/ui/on-count-change';
 
 const newKey = () => crypto.randomUUID().replace(/-/g, '');
 
@@ -33,13 +34,9 @@ export class CashPaymentForm {
   private key = newKey();
 
   constructor() {
-    let seen = this.savedCount();
-    effect(() => {
-      if (this.savedCount() !== seen) {
-        seen = this.savedCount();
-        this.key = newKey();
-        this.form.reset({ userId: 0, planId: 0, note: '' });
-      }
+    onCountChange(this.savedCount, () => {
+      this.key = newKey();
+      this.form.reset({ userId: 0, planId: 0, note: '' });
     });
   }
 

@@ -6,6 +6,7 @@ import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { CreateDuesPlanRequest, DUES_CURRENCIES, DUES_LIMITS, DUES_PERIODS } from '@shared/dues';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
+import { onCountChange } from '@app/ui/on-count-change';
 
 /** A new plan: name, amount in the major unit (converted to cents on the way out), currency and period. */
 @Component({
@@ -32,13 +33,7 @@ export class DuesPlanForm {
 
   constructor() {
     effect(() => applyServerFieldErrors(this.form, this.fieldErrors()));
-    let seen = this.savedCount();
-    effect(() => {
-      if (this.savedCount() !== seen) {
-        seen = this.savedCount();
-        this.form.reset();
-      }
-    });
+    onCountChange(this.savedCount, () => this.form.reset());
   }
 
   protected submit(): void {

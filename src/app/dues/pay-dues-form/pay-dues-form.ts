@@ -4,6 +4,7 @@ import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
 import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
 import { describePlanPrice, DuesPlan, PayDuesRequest, TestCard } from '@shared/dues';
+import { onCountChange } from '@app/ui/on-count-change';
 
 /** A fresh key per payment attempt; a resend of the same attempt keeps it, so it is never charged twice. */
 const newAttemptKey = () => crypto.randomUUID().replace(/-/g, '');
@@ -40,13 +41,9 @@ export class PayDuesForm {
       const chosen = this.currentPlanId() ?? this.plans()[0]?.id ?? 0;
       if (!this.form.controls.planId.value && chosen) this.form.controls.planId.setValue(chosen);
     });
-    let seen = this.paymentsMade();
-    effect(() => {
-      if (this.paymentsMade() !== seen) {
-        seen = this.paymentsMade();
-        this.attemptKey = newAttemptKey();
-        this.form.controls.cardToken.reset('');
-      }
+    onCountChange(this.paymentsMade, () => {
+      this.attemptKey = newAttemptKey();
+      this.form.controls.cardToken.reset('');
     });
     // Another plan or card is another attempt.
     this.form.controls.planId.valueChanges.subscribe(() => (this.attemptKey = newAttemptKey()));

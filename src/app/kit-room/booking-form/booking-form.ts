@@ -12,6 +12,7 @@ import { FieldErrors } from '@app/ui/server-field-errors';
 import { NamedChoice } from '../named-choice';
 import { WallClockFields } from '../wall-clock-fields/wall-clock-fields';
 import { endAfterStart, wallClockOf } from './booking-form-model';
+import { onCountChange } from '@app/ui/on-count-change';
 
 /** Item, start and end (wall-clock, co-op zone) and a note; admins may block the item for maintenance instead. */
 @Component({
@@ -65,14 +66,9 @@ export class BookingForm {
         control?.markAsTouched();
       }
     });
-    let seen = this.createdCount();
-    effect(() => {
-      const count = this.createdCount();
-      if (count !== seen) {
-        seen = count;
-        this.form.patchValue({ startDate: null, endDate: null, note: '', maintenance: false, batchId: null });
-        this.form.markAsUntouched();
-      }
+    onCountChange(this.createdCount, () => {
+      this.form.patchValue({ startDate: null, endDate: null, note: '', maintenance: false, batchId: null });
+      this.form.markAsUntouched();
     });
   }
 

@@ -7,6 +7,7 @@ import { MatInput } from '@angular/material/input';
 import { Role, ROLES } from '@shared/auth';
 import { CreateInvitationRequest } from '@shared/members';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
+import { onCountChange } from '@app/ui/on-count-change';
 
 const DEFAULT_ROLES = { member: true, brewer: false, admin: false } satisfies Record<Role, boolean>;
 
@@ -37,14 +38,7 @@ export class InviteForm {
 
   constructor() {
     effect(() => applyServerFieldErrors(this.form, this.fieldErrors()));
-    let seen = this.createdCount();
-    effect(() => {
-      const count = this.createdCount();
-      if (count !== seen) {
-        seen = count;
-        this.form.reset({ email: '', roles: { ...DEFAULT_ROLES } });
-      }
-    });
+    onCountChange(this.createdCount, () => this.form.reset({ email: '', roles: { ...DEFAULT_ROLES } }));
   }
 
   protected submit(): void {

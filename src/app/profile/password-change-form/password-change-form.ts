@@ -8,6 +8,7 @@ import { ChangePasswordRequest } from '@shared/profile';
 import { confirmPasswordValidator } from '@app/auth/confirm-password-validator';
 import { NewPasswordFields } from '@app/auth/new-password-fields/new-password-fields';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
+import { onCountChange } from '@app/ui/on-count-change';
 
 /** The current password, then the new one typed twice. */
 @Component({
@@ -32,13 +33,7 @@ export class PasswordChangeForm {
 
   constructor() {
     effect(() => applyServerFieldErrors(this.form, this.serverErrors()));
-    let seen = this.changedCount();
-    effect(() => {
-      if (this.changedCount() !== seen) {
-        seen = this.changedCount();
-        this.form.reset();
-      }
-    });
+    onCountChange(this.changedCount, () => this.form.reset());
   }
 
   protected submit(): void {
