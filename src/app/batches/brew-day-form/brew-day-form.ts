@@ -1,5 +1,5 @@
 import { DecimalPipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, effect, inject, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, output } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatDatepicker, MatDatepickerInput, MatDatepickerToggle } from '@angular/material/datepicker';
@@ -25,6 +25,8 @@ const range = (r: { min: number; max: number }) => [Validators.min(r.min), Valid
 export class BrewDayForm {
   readonly measured = input.required<BrewDayMeasurements>();
   readonly predicted = input<BatchPrediction | null>(null);
+  /** The batch's own planned volume, which may differ from the volume its recipe version was designed for. */
+  readonly plannedLitres = input<number | null>(null);
   readonly editable = input(false);
   readonly saving = input(false);
   readonly coopTimeZone = input.required<string>();
@@ -32,6 +34,14 @@ export class BrewDayForm {
   readonly saved = output<BrewDayMeasurements>();
 
   protected readonly limits = L;
+  protected readonly planned = computed(() => this.plannedLitres() ?? this.predicted()?.batchVolumeLitres ?? null);
+  /** The version's pre-boil figures hold for its own volume; said so when the batch is planned at another. */
+  protected readonly recipeVolumeNote = computed(() => {
+    const p = this.predicted();
+    const planned = this.plannedLitres();
+    if (!p || planned === null || Math.abs(planned - p.batchVolumeLitres) < 0.05) return '';
+    return ` for the recipe's ${p.batchVolumeLitres.toFixed(1)} L`;
+  });
   protected readonly form = inject(NonNullableFormBuilder).group({
     preBoilLitres: [null as number | null, range(L.volumeLitres)],
     preBoilGravity: [null as number | null, range(L.gravity)],
