@@ -45,4 +45,22 @@ describe('Production report in the browser', () => {
     expect(await seriousA11yViolations(page)).toEqual([]);
     await context.close();
   }, 120_000);
+
+  it('when an admin reads the report on a 375 px phone, then each month is a card of labelled figures with no stray header row and no sideways scroll', async () => {
+    const admin = await createUser(env.server.db, ['member', 'admin']);
+    const { context, page } = await newPage(env.browser, env.server.baseUrl, { width: 375, height: 800 });
+    await signInPage.signIn(page, admin.email, admin.password);
+    await page.waitForURL(/\/today/);
+
+    await productionReportPage.openFromBrewPlan(page);
+    const thisMonth = `${DateTime.now().setZone(loadConfig().coopTimeZone).setLocale('en-US').toFormat('LLL yyyy')} (so far)`;
+    const card = page.getByRole('row').filter({ has: page.getByRole('rowheader', { name: thisMonth, exact: true }) });
+    expect(await card.locator('td[data-label="Litres brewed"]').isVisible()).toBe(true);
+    // The column headers say only what each card's labels say: screen readers keep them, the eye does not.
+    const headerRow = page.getByRole('row').filter({ has: page.getByRole('columnheader', { name: 'Litres brewed' }) });
+    expect((await headerRow.boundingBox())?.height ?? 0).toBeLessThanOrEqual(1);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
+    expect(await seriousA11yViolations(page)).toEqual([]);
+    await context.close();
+  }, 90_000);
 });
