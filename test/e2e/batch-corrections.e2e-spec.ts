@@ -41,6 +41,16 @@ describe('Correcting a batch and its readings in the browser', () => {
     expect(moved.conditioning_at!.toISOString()).toBe(DateTime.fromObject({ year: 2026, month: 11, day: 26, hour: 9, minute: 15 }, { zone }).toUTC().toISO());
 
     await page.goto(`/gravity-log/${batchId}`);
+    // The reading form's hints (the co-op's zone under the time) stay clear of the labels of the row below.
+    await page.getByRole('form', { name: 'Log a reading' }).locator('mat-hint').first().waitFor();
+    const overlaps = await page.evaluate(() => {
+      const form = document.querySelector('form[aria-label="Log a reading"]')!;
+      const [hints, labels] = ['mat-hint', 'mat-label'].map((selector) => [...form.querySelectorAll(selector)].map((el) => ({ text: el.textContent!.trim(), box: el.getBoundingClientRect() })));
+      return hints.flatMap((hint) =>
+        labels.filter(({ box }) => box.width > 0 && box.left < hint.box.right && hint.box.left < box.right && box.top < hint.box.bottom && hint.box.top < box.bottom).map((label) => `${hint.text} over ${label.text}`),
+      );
+    });
+    expect(overlaps).toEqual([]);
     const before = (await env.server.db('gravity_readings').where({ batch_id: batchId }).orderBy('measured_at', 'desc').first())!;
     await page.getByRole('button', { name: /^Correct the reading of/ }).first().click();
     const dialog = page.getByRole('dialog', { name: 'Correct the reading' });
