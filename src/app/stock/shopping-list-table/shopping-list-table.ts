@@ -36,7 +36,7 @@ import { ShoppingListLine, stockAmountText } from '@shared/stock';
             </tr>
           } @empty {
             <tr>
-              <td colspan="5">Stock covers every planned batch in this horizon.</td>
+              <td colspan="5">{{ batchCount() === 0 ? 'No batch is planned to brew in these days.' : 'Stock covers every planned batch in these days.' }}</td>
             </tr>
           }
         </tbody>
@@ -49,6 +49,8 @@ import { ShoppingListLine, stockAmountText } from '@shared/stock';
 export class ShoppingListTable {
   readonly lines = input.required<readonly ShoppingListLine[]>();
   readonly unitSystem = input<UnitSystem>('metric');
+  /** Planned batches counted in the horizon: with none, an empty list says so rather than that stock covers them. */
+  readonly batchCount = input.required<number>();
 
   protected readonly rows = computed(() =>
     this.lines().map((line) => {
