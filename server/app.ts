@@ -1,9 +1,7 @@
 import { responseCompression } from './http/response-compression';
 import express, { Express } from 'express';
 import { Knex } from 'knex';
-import { randomUUID } from 'node:crypto';
 import pino, { Logger } from 'pino';
-import pinoHttp from 'pino-http';
 import {
   createAuthRouter,
   createAuthService,
@@ -20,6 +18,7 @@ import { apiNotFound, errorMiddleware } from './errors/error-middleware';
 import { createHealthRouter } from './health/health.routes';
 import { startHousekeeping } from './housekeeping/housekeeping';
 import { mountApi } from './http/api-mount';
+import { requestLogger } from './http/request-logger';
 import { securityHeaders } from './http/security-headers';
 import { wellFormedBody } from './http/well-formed-body';
 import { createInvitationsRouter, createInvitationsService } from './invitations';
@@ -45,10 +44,11 @@ import { createStrengthCheckRouter, createStrengthCheckService } from './strengt
 import { createFermentationRouter } from './fermentation/fermentation.routes';
 import { createBatchesRouter, createBatchesService } from './batches';
 import { createBatchReadingsRouter, createPushRouter, createPushTokensService, createReadingsRouter, createReadingsService, DEFAULT_PUSH_RATE_LIMIT, PushRateLimit } from './readings';
-import { createDuesLedgerService, createDuesPaymentsService, createDuesRenewalsService, createDuesRouter, createDuesStanding, createStripeGateway, DuesRenewalsService } from './dues';
-import { createMailRouter, createMailSender, createOutboxDispatcher, createOutboxService, OutboxDispatcher } from './mail';
+import { createDuesLedgerService, createDuesPaymentsService, createDuesRenewalsService, createDuesRouter, createDuesStanding, createStripeGateway } from './dues';
+import { createMailRouter, createMailSender, createOutboxDispatcher, createOutboxService } from './mail';
+import { AppJobs, appJobSchedule } from './scheduler/app-jobs';
 import { processHolderId, startScheduler } from './scheduler/scheduler';
-import { BookingNotices, bookingsRepository, createBookingFeedService, createBookingNotices, createBookingsRouter, createBookingsService } from './bookings';
+import { bookingsRepository, createBookingFeedService, createBookingNotices, createBookingsRouter, createBookingsService } from './bookings';
 import { createKitRouter, createKitService } from './kit';
 import { createBrewPlanReads, createBrewPlanRouter, createBrewPlanWrites } from './brew-plan';
 import { createProductionReportService, createReportsRouter } from './reports';
@@ -73,27 +73,11 @@ export interface AppDeps {
 export interface CreatedApp {
   app: Express;
   /** The scheduled work, also callable directly. */
-  jobs: { outbox: OutboxDispatcher; dues: DuesRenewalsService; bookingReminders: BookingNotices };
+  jobs: AppJobs;
   close(): void;
 }
 
 export const DEFAULT_PUBLIC_REQUEST_LIMIT: RateLimit = { points: 20, windowSeconds: 15 * 60 };
-
-function requestLogger(logger: Logger) {
-  return pinoHttp({
-    logger,
-    genReqId: (_req, res) => {
-      const id = randomUUID();
-      res.setHeader('X-Request-Id', id);
-      return id;
-    },
-    // One short line per request: no headers, so no cookies in the log.
-    serializers: {
-      req: (req: { id: string; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
-      res: (res: { statusCode: number }) => ({ status: res.statusCode }),
-    },
-  });
-}
 
 /** Builds the Express app: API routers under /api, the built client, one error handler last. */
 export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAULT_PUBLIC_REQUEST_LIMIT, pushRateLimit = DEFAULT_PUSH_RATE_LIMIT, sessionCleanupMs = 15 * 60 * 1000, runScheduler = false, ...deps }: AppDeps): CreatedApp {
@@ -161,24 +145,12 @@ export function createApp({ config, db, signInLimits, publicRequestLimit = DEFAU
   app.use(errorMiddleware);
 
   const holder = processHolderId();
-  const jobs = {
+  const jobs: AppJobs = {
     outbox: createOutboxDispatcher({ db, send: createMailSender(config.smtp), holder }),
     dues: createDuesRenewalsService({ ...duesDeps, upcomingBookings: bookingsRepository.countUpcomingForUser }),
     bookingReminders: bookingNotices,
   };
-  const scheduler = runScheduler
-    ? startScheduler({
-        db,
-        holder,
-        logger,
-        jobs: [
-          { name: 'outbox', everySeconds: config.mailDispatchSeconds, exclusive: false, run: () => jobs.outbox.dispatchDue() },
-          { name: 'dues-renewals', everySeconds: 3600, exclusive: true, run: () => jobs.dues.runRenewals() },
-          { name: 'dues-overdue-reminders', everySeconds: 3600, exclusive: true, run: () => jobs.dues.sendOverdueReminders() },
-          { name: 'booking-reminders', everySeconds: 3600, exclusive: true, run: () => jobs.bookingReminders.remindTomorrow() },
-        ],
-      })
-    : null;
+  const scheduler = runScheduler ? startScheduler({ db, holder, logger, jobs: appJobSchedule(jobs, config.mailDispatchSeconds) }) : null;
   const stopHousekeeping = startHousekeeping(db, sessionCleanupMs, (err) => logger.warn({ err }, 'housekeeping failed; trying again later'));
   return {
     app,
