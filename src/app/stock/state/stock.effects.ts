@@ -2,7 +2,7 @@ import { inject } from '@angular/core';
 import { Actions, createEffect, ofType } from '@ngrx/effects';
 import { catchError, EMPTY, map, of, switchMap, tap } from 'rxjs';
 import { addDays, STOCK_LIMITS } from '@shared/stock';
-import { apiErrorMessage } from '@app/core/api-error-message';
+import { apiErrorMessage, apiFieldErrors } from '@app/core/api-error-message';
 import { Notifier } from '@app/core/notifier';
 import { ingredientChoices } from '../ingredient-choice';
 import { localToday } from '../local-today';
@@ -39,6 +39,15 @@ export const loadChoices = createEffect(
 /** The person's unit system, so amounts show in kg or lb, g or oz. */
 export const loadUnits = loadUnitsOn(StockPageActions.opened, ShoppingListPageActions.opened);
 
+const HORIZON_FIELDS: Record<string, string> = { from: 'From', to: 'To' };
+
+/** The horizon has no form controls to carry the server's reasons, so the message names each field and why. */
+function horizonRefusal(error: unknown): string {
+  const fields = apiFieldErrors(error);
+  if (!fields) return apiErrorMessage(error, 'The shopping list could not be loaded.');
+  return Object.entries(fields).map(([field, reason]) => `${HORIZON_FIELDS[field] ?? field}: ${reason}.`).join(' ');
+}
+
 export const loadShoppingList = createEffect(
   (actions$ = inject(Actions), client = inject(StockClient)) =>
     actions$.pipe(
@@ -47,7 +56,7 @@ export const loadShoppingList = createEffect(
       switchMap(({ from, to }) =>
         client.shoppingList(from, to).pipe(
           map((list) => StockApiActions.shoppingListLoadedSuccess({ list })),
-          catchError((error: unknown) => of(StockApiActions.shoppingListLoadedFailure({ message: apiErrorMessage(error, 'The shopping list could not be loaded.') }))),
+          catchError((error: unknown) => of(StockApiActions.shoppingListLoadedFailure({ message: horizonRefusal(error) }))),
         ),
       ),
     ),
