@@ -2,7 +2,8 @@ import { Knex } from 'knex';
 import { DateTime } from 'luxon';
 import { SessionUser } from '@shared/auth';
 import { BOOKING_LIMITS, instantToWallClock } from '@shared/bookings';
-import { BREW_PLAN_LIMITS, BrewPlanTimeline, ProposalRequest, proposeSlots, scheduleTotalDays, SlotProposal, SlotProposals } from '@shared/brew-plan';
+import { FERMENTER_HOLDING_STATUSES } from '@shared/batches';
+import { BREW_PLAN_LIMITS, leftOutFermenters, BrewPlanTimeline, ProposalRequest, proposeSlots, scheduleTotalDays, SlotProposal, SlotProposals } from '@shared/brew-plan';
 import { fermentationChart } from '../fermentation/fermentation.routes';
 import { RecipesService } from '../recipes';
 import { CalendarBatch, loadPlanCalendar } from './plan-calendar';
@@ -55,7 +56,11 @@ export function createBrewPlanReads(db: Knex, coopTimeZone: string, recipes: Rec
         brewDate: s.placed.brewDate, startLocal: instantToWallClock(new Date(s.placed.start), coopTimeZone), endLocal: instantToWallClock(new Date(s.placed.end), coopTimeZone),
         heldUntil: iso(s.heldUntil), phases: s.placed.phases.map((p) => ({ phase: p.phase, start: iso(p.start), end: iso(p.end) })),
       }));
-      return { recipeName: version.design.name, schedule, basis, weekStart: monday.toISODate()!, proposals };
+      const holds = calendar.batches
+        .filter((b) => FERMENTER_HOLDING_STATUSES.includes(b.status))
+        .map((b) => ({ kitItemId: b.fermenterId, batchId: b.id, batchName: b.name }));
+      const leftOut = leftOutFermenters(calendar.fermenters, slots, holds, request.volumeLitres);
+      return { recipeName: version.design.name, schedule, basis, weekStart: monday.toISODate()!, proposals, leftOut };
     },
   };
 }

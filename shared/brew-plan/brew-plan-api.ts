@@ -1,6 +1,7 @@
 import { BookingConflict } from '../bookings/bookings-api';
 import { BatchStatus } from '../batches/batch-status';
 import { BrewSchedule, PlanPhaseName, ScheduleBasis } from './brew-schedule';
+import { LeftOutFermenter } from './left-out-fermenters';
 import { Utilisation } from './utilisation';
 
 export const BREW_PLAN_PATH = '/api/brew-plan';
@@ -92,6 +93,8 @@ export interface SlotProposals {
   /** Monday of the wanted week. */
   weekStart: string;
   proposals: SlotProposal[];
+  /** Each fermenter not proposed, with why (held by a batch, too small, out of service, no free slot). */
+  leftOut: LeftOutFermenter[];
 }
 
 export interface AcceptSlotRequest extends BrewSchedule {

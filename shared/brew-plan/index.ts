@@ -7,3 +7,4 @@ export * from './propose-slots';
 export * from './utilisation';
 export * from './brew-plan-api';
 export * from './batch-occupancy';
+export * from './left-out-fermenters';

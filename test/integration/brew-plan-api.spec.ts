@@ -147,6 +147,11 @@ describe('Brew plan API', () => {
 
     expect(res.status).toBe(200);
     expect(res.body.proposals.some((p: { kitItemId: number }) => p.kitItemId === item.id)).toBe(false);
+    const held = await t.db('batches').where({ id: planned.batchId }).first();
+    expect(res.body.leftOut.find((l: { kitItemId: number }) => l.kitItemId === item.id)).toMatchObject({
+      reason: { kind: 'held', batchId: planned.batchId, batchName: held!.name },
+      message: `Held by batch "${held!.name}" until it is packaged.`,
+    });
   });
 
   it('when the input is bad, then 400 names the field and stores nothing', async () => {

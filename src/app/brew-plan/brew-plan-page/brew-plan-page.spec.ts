@@ -80,6 +80,7 @@ describe('BrewPlanPage', () => {
     const proposals: SlotProposals = {
       recipeName: 'Hedge pale', schedule: { fermentationDays: 10, conditioningDays: 4 }, basis: 'brewer', weekStart: '2027-01-11',
       proposals: [{ kitItemId: 2, kitItemCode: 'F5', kitItemName: 'Big one', capacityLitres: 60, brewDate: '2027-01-11', startLocal: '2027-01-11T08:00', endLocal: '2027-01-26T18:00', heldUntil: '2027-01-27T17:00:00.000Z', phases: [] }],
+      leftOut: [],
     };
     const element = await render(['member', 'brewer'], { proposals });
     const page = fixture.componentInstance as unknown as { requestProposals(p: unknown): void };
@@ -92,5 +93,25 @@ describe('BrewPlanPage', () => {
       request: { name: 'Second pale', recipeId: 4, recipeVersion: 2, volumeLitres: 40, kitItemId: 2, brewDate: '2027-01-11', fermentationDays: 10, conditioningDays: 4 },
     }));
     expect(element.querySelector('cw-move-batch-form')).not.toBeNull();
+  });
+
+  it('names each fermenter left out and why, and drops the proposals once the plan form is edited', async () => {
+    const proposals: SlotProposals = {
+      recipeName: 'Hedge pale', schedule: { fermentationDays: 14, conditioningDays: 7 }, basis: 'ale-yeast', weekStart: '2027-01-11', proposals: [],
+      leftOut: [
+        { kitItemId: 1, kitItemCode: 'F1', kitItemName: 'Conical 1', reason: { kind: 'held', batchId: 9, batchName: 'Hedge pale' }, message: 'Held by batch "Hedge pale" until it is packaged.' },
+        { kitItemId: 3, kitItemCode: 'F3', kitItemName: 'Small one', reason: { kind: 'too-small', capacityLitres: 15 }, message: 'Too small: holds 15 L, the batch is 20 L.' },
+      ],
+    };
+    const element = await render(['member', 'brewer'], { proposals });
+
+    const leftOut = [...element.querySelectorAll('[aria-label="Fermenters not proposed"] li')].map((li) => li.textContent?.trim());
+    expect(leftOut).toEqual(['F1 · Conical 1: Held by batch "Hedge pale" until it is packaged.', 'F3 · Small one: Too small: holds 15 L, the batch is 20 L.']);
+
+    const volume = element.querySelector<HTMLInputElement>('cw-plan-batch-form input[formControlName="volumeLitres"]')!;
+    volume.value = '';
+    volume.dispatchEvent(new Event('input'));
+
+    expect(store.dispatch).toHaveBeenCalledWith(BrewPlanPageActions.planFormChanged());
   });
 });

@@ -71,6 +71,10 @@ export class BrewPlanPage implements OnInit {
     this.store.dispatch(BrewPlanPageActions.proposalsRequested({ request: plan.request }));
   }
 
+  protected planFormChanged(): void {
+    if (this.proposals() || this.planError()) this.store.dispatch(BrewPlanPageActions.planFormChanged());
+  }
+
   protected accept(slot: SlotProposal): void {
     const asked = this.asked();
     const proposals = this.proposals();

@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, output } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatDatepicker, MatDatepickerInput, MatDatepickerToggle } from '@angular/material/datepicker';
@@ -37,6 +37,8 @@ export class PlanBatchForm {
   /** Goes up by one per accepted slot; the form then clears. */
   readonly acceptedCount = input(0);
   readonly proposalsRequested = output<PlanRequest>();
+  /** Any edit, valid or not: proposals shown for the earlier values are stale. */
+  readonly changed = output<void>();
 
   protected readonly limits = { volume: BATCH_LIMITS.volumeLitres, fermentation: BREW_PLAN_LIMITS.fermentationDays, conditioning: BREW_PLAN_LIMITS.conditioningDays, nameMax: BATCH_LIMITS.nameMaxLength };
   private readonly fb = inject(NonNullableFormBuilder);
@@ -58,6 +60,7 @@ export class PlanBatchForm {
   constructor() {
     effect(() => applyServerFieldErrors(this.form, this.fieldErrors()));
     effect(() => this.form.controls.recipeVersion.setValue(this.versions()[0] ?? null));
+    this.form.valueChanges.pipe(takeUntilDestroyed()).subscribe(() => this.changed.emit());
     onCountChange(this.acceptedCount, () => {
       this.form.patchValue({ name: '', fermentationDays: null, conditioningDays: null });
       this.form.markAsUntouched();

@@ -29,10 +29,21 @@ import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
     } @else {
       <p class="empty" role="status">No fermenter that holds this volume is free for the whole schedule within the search; try a later week or a smaller volume.</p>
     }
+    @if (p.leftOut.length) {
+      <h3 class="left-out-heading">Not proposed</h3>
+      <ul class="left-out" aria-label="Fermenters not proposed">
+        @for (item of p.leftOut; track item.kitItemId) {
+          <li><strong>{{ item.kitItemCode }}</strong> · {{ item.kitItemName }}: {{ item.message }}</li>
+        }
+      </ul>
+    }
   `,
   styles: `
     .proposals { list-style: none; padding: 0; margin: 0; display: grid; gap: 12px; }
     li { display: flex; flex-wrap: wrap; gap: 8px 16px; align-items: center; justify-content: space-between; padding: 8px 0; border-bottom: 1px solid var(--mat-sys-outline-variant); }
+    .left-out-heading { font-size: 1rem; margin: 16px 0 4px; }
+    .left-out { margin: 0; padding-left: 20px; font-size: 0.875rem; }
+    .left-out li { display: list-item; border: 0; padding: 2px 0; }
     .when, .held, .schedule { font-size: 0.875rem; color: var(--mat-sys-on-surface-variant); }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -4,7 +4,7 @@ import { BrewPlanPageActions } from './brew-plan-page.actions';
 import { brewPlanFeature, initialBrewPlanState } from './brew-plan.feature';
 
 const reduce = brewPlanFeature.reducer;
-const proposals: SlotProposals = { recipeName: 'Pale', schedule: { fermentationDays: 14, conditioningDays: 7 }, basis: 'ale-yeast', weekStart: '2027-01-04', proposals: [] };
+const proposals: SlotProposals = { recipeName: 'Pale', schedule: { fermentationDays: 14, conditioningDays: 7 }, basis: 'ale-yeast', weekStart: '2027-01-04', proposals: [], leftOut: [] };
 
 describe('brewPlanFeature', () => {
   it('clears the proposals and counts the slot once one is accepted', () => {
@@ -30,5 +30,14 @@ describe('brewPlanFeature', () => {
     const refused = reduce({ ...initialBrewPlanState, accepting: true }, BrewPlanApiActions.slotAcceptedFailure({ message: 'F2 is booked by Jonah Weiss (booking #4)', fields: null }));
 
     expect(refused).toMatchObject({ accepting: false, planError: 'F2 is booked by Jonah Weiss (booking #4)' });
+  });
+
+  it('drops proposals and the plan error once the plan form changes, so none made for old values can be accepted', () => {
+    const shown = { ...reduce(initialBrewPlanState, BrewPlanApiActions.proposalsLoadedSuccess({ proposals })), planError: 'F2 is booked' };
+
+    const edited = reduce(shown, BrewPlanPageActions.planFormChanged());
+
+    expect(shown.proposals).toBe(proposals);
+    expect(edited).toMatchObject({ proposals: null, planError: null });
   });
 });

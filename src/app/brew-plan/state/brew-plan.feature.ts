@@ -50,6 +50,7 @@ export const brewPlanFeature = createFeature({
     on(BrewPlanApiActions.timelineLoadedFailure, (state, { message }): BrewPlanState => ({ ...state, loading: false, loadError: message })),
     on(BrewPlanApiActions.recipesLoadedSuccess, (state, { recipes }): BrewPlanState => ({ ...state, recipes })),
     on(BrewPlanPageActions.proposalsRequested, (state): BrewPlanState => ({ ...state, proposing: true, proposals: null, planError: null, planFieldErrors: null })),
+    on(BrewPlanPageActions.planFormChanged, (state): BrewPlanState => (state.proposals || state.planError ? { ...state, proposals: null, planError: null } : state)),
     on(BrewPlanApiActions.proposalsLoadedSuccess, (state, { proposals }): BrewPlanState => ({ ...state, proposing: false, proposals })),
     on(BrewPlanApiActions.proposalsLoadedFailure, (state, { message, fields }): BrewPlanState => ({ ...state, proposing: false, planError: message, planFieldErrors: fields })),
     on(BrewPlanPageActions.slotAccepted, (state): BrewPlanState => ({ ...state, accepting: true, planError: null, planFieldErrors: null })),
