@@ -91,6 +91,17 @@ describe('Batches and the gravity log in the browser', () => {
     expect(await gravityLogPage.rowCount(page)).toBe(1);
     await page.getByText('1.0480').first().waitFor();
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
+    // The reading is a card: its corrected SG sits inside the screen, with no sideways scroll in the table either.
+    const corrected = page.getByRole('region', { name: 'Readings' }).locator('td[data-label="SG 20/20 °C"]').first();
+    await corrected.scrollIntoViewIfNeeded();
+    expect(await corrected.isVisible()).toBe(true);
+    expect(await corrected.textContent()).toContain('1.0480');
+    const sgBox = await corrected.boundingBox();
+    expect(sgBox!.x).toBeGreaterThanOrEqual(0);
+    expect(sgBox!.x + sgBox!.width).toBeLessThanOrEqual(375);
+    expect(sgBox!.y).toBeGreaterThanOrEqual(0);
+    expect(sgBox!.y + sgBox!.height).toBeLessThanOrEqual(740);
+    expect(await page.getByRole('region', { name: 'Readings' }).evaluate((el) => el.scrollWidth - el.clientWidth)).toBeLessThanOrEqual(0);
     expect(await seriousA11yViolations(page)).toEqual([]);
     await context.close();
   }, 90_000);
