@@ -9,6 +9,11 @@ describe('ZonedDateTimePipe', () => {
     expect(pipe.transform('2026-07-02T08:15:00.000Z', 'Europe/Berlin')).toBe('2 Jul 2026, 10:15 CEST');
   });
 
+  // IANA tz database: Pacific/Auckland is UTC+13 in December, so 20:30 UTC is already the next day there.
+  it('shows only the co-op day when asked for the date', () => {
+    expect(pipe.transform('2026-12-02T20:30:00.000Z', 'Pacific/Auckland', 'date')).toBe('3 Dec 2026');
+  });
+
   it('shows a dash for a missing instant', () => {
     expect(pipe.transform(null, 'UTC')).toBe('—');
   });

@@ -1,12 +1,17 @@
 import { Pipe, PipeTransform } from '@angular/core';
 import { DateTime } from 'luxon';
 
-/** An instant (ISO text) as date and time in an IANA zone, with the zone's short name: "2 Dec 2026, 09:15 CET". */
+const FORMATS = { dateTime: 'd LLL yyyy, HH:mm ZZZZ', date: 'd LLL yyyy' } as const;
+
+/**
+ * An instant (ISO text) in an IANA zone: "2 Dec 2026, 09:15 CET", or with 'date' only the day there, "2 Dec 2026".
+ * The co-op's zone, not the browser's, decides which day and hour a record belongs to.
+ */
 @Pipe({ name: 'cwZonedDateTime' })
 export class ZonedDateTimePipe implements PipeTransform {
-  transform(instant: string | null | undefined, zone: string): string {
+  transform(instant: string | null | undefined, zone: string, show: keyof typeof FORMATS = 'dateTime'): string {
     if (!instant) return '—';
     const shown = DateTime.fromISO(instant, { zone: 'utc' }).setZone(zone);
-    return shown.isValid ? shown.toFormat('d LLL yyyy, HH:mm ZZZZ', { locale: 'en-GB' }) : '—';
+    return shown.isValid ? shown.toFormat(FORMATS[show], { locale: 'en-GB' }) : '—';
   }
 }

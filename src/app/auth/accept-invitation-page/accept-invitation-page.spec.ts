@@ -3,6 +3,7 @@ import { provideRouter } from '@angular/router';
 import { MockStore, provideMockStore } from '@ngrx/store/testing';
 import { AcceptInvitationPageActions } from '../state/accept-invitation-page.actions';
 import { AccountState, initialAccountState } from '../state/account.feature';
+import { initialAuthState } from '../state/auth.feature';
 import { AcceptInvitationPage } from './accept-invitation-page';
 
 const invitation = { email: 'new.member@fernhollow.example', roles: ['member' as const, 'brewer' as const], expiresAt: '2026-12-08T10:00:00Z' };
@@ -14,7 +15,7 @@ describe('AcceptInvitationPage', () => {
   async function render(account: Partial<AccountState>): Promise<HTMLElement> {
     TestBed.configureTestingModule({
       imports: [AcceptInvitationPage],
-      providers: [provideRouter([]), provideMockStore({ initialState: { account: { ...initialAccountState, ...account } } })],
+      providers: [provideRouter([]), provideMockStore({ initialState: { account: { ...initialAccountState, ...account }, auth: { ...initialAuthState, coopTimeZone: 'Pacific/Auckland' } } })],
     });
     store = TestBed.inject(MockStore);
     jest.spyOn(store, 'dispatch');
@@ -47,6 +48,13 @@ describe('AcceptInvitationPage', () => {
     expect(element.textContent).toContain('new.member@fernhollow.example');
     const badges = [...element.querySelectorAll('cw-role-badge')].map((badge) => badge.textContent?.trim());
     expect(badges).toEqual(['member', 'brewer']);
+  });
+
+  // IANA tz database: Pacific/Auckland is UTC+13 in December, so 10:00 UTC is 23:00 the same day there.
+  it('shows the expiry on the co-op clock from the session probe', async () => {
+    const element = await render({ invitation, invitationStatus: 'ready' });
+
+    expect(element.textContent).toContain('8 Dec 2026, 23:00 GMT+13');
   });
 
   it('dispatches Submitted with name and password when both passwords match', async () => {

@@ -1,17 +1,18 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, inject, input, OnInit } from '@angular/core';
 import { RouterLink } from '@angular/router';
 import { Store } from '@ngrx/store';
 import { AcceptInvitationRequest } from '@shared/auth';
 import { PublicFrame } from '@app/ui/public-frame/public-frame';
 import { RoleBadge } from '@app/ui/role-badge/role-badge';
+import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 import { AcceptInvitationForm } from '../accept-invitation-form/accept-invitation-form';
 import { AcceptInvitationPageActions } from '../state/accept-invitation-page.actions';
 import { accountFeature } from '../state/account.feature';
+import { authFeature } from '../state/auth.feature';
 
 @Component({
   selector: 'cw-accept-invitation-page',
-  imports: [PublicFrame, AcceptInvitationForm, RoleBadge, RouterLink, DatePipe],
+  imports: [PublicFrame, AcceptInvitationForm, RoleBadge, RouterLink, ZonedDateTimePipe],
   templateUrl: './accept-invitation-page.html',
   styleUrl: './accept-invitation-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -27,6 +28,7 @@ export class AcceptInvitationPage implements OnInit {
   protected readonly submitting = this.store.selectSignal(accountFeature.selectSubmitting);
   protected readonly error = this.store.selectSignal(accountFeature.selectError);
   protected readonly fieldErrors = this.store.selectSignal(accountFeature.selectFieldErrors);
+  protected readonly timeZone = this.store.selectSignal(authFeature.selectCoopTimeZone);
 
   ngOnInit(): void {
     this.store.dispatch(AcceptInvitationPageActions.opened({ token: this.token() }));

@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, inject, OnInit } from '@angular/core';
 import { MatAnchor } from '@angular/material/button';
 import { Store } from '@ngrx/store';
+import { authFeature } from '@app/auth/state/auth.feature';
 import { CreateDuesPlanRequest, DUES_LEDGER_CSV_PATH, RecordCashPaymentRequest } from '@shared/dues';
 import { CashPaymentForm } from '../cash-payment-form/cash-payment-form';
 import { DuesLedgerTable } from '../dues-ledger-table/dues-ledger-table';
@@ -27,6 +28,7 @@ export class DuesLedgerPage implements OnInit {
   protected readonly saving = this.store.selectSignal(duesFeature.selectLedgerSaving);
   protected readonly fieldErrors = this.store.selectSignal(duesFeature.selectLedgerFieldErrors);
   protected readonly changes = this.store.selectSignal(duesFeature.selectLedgerChanges);
+  protected readonly timeZone = this.store.selectSignal(authFeature.selectCoopTimeZone);
 
   ngOnInit(): void {
     this.store.dispatch(DuesLedgerPageActions.opened());

@@ -28,6 +28,7 @@ export class DuesPage implements OnInit {
   protected readonly paymentError = this.store.selectSignal(duesFeature.selectPaymentError);
   protected readonly paymentsMade = this.store.selectSignal(duesFeature.selectPaymentsMade);
   private readonly user = this.store.selectSignal(authFeature.selectUser);
+  protected readonly timeZone = this.store.selectSignal(authFeature.selectCoopTimeZone);
   protected readonly isAdmin = computed(() => hasAnyRole(this.user()?.roles ?? [], ['admin']));
 
   ngOnInit(): void {

@@ -1,20 +1,22 @@
 import { CdkCopyToClipboard } from '@angular/cdk/clipboard';
-import { DatePipe, DOCUMENT } from '@angular/common';
+import { DOCUMENT } from '@angular/common';
 import { afterNextRender, ChangeDetectionStrategy, Component, computed, ElementRef, inject, input, output } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
+import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 import { IssuedLink } from '../state/members.feature';
 
 /** A freshly issued one-time link with a copy button, for the admin to hand over. */
 @Component({
   selector: 'cw-issued-link-panel',
-  imports: [CdkCopyToClipboard, MatButton, MatIcon, DatePipe],
+  imports: [CdkCopyToClipboard, MatButton, MatIcon, ZonedDateTimePipe],
   templateUrl: './issued-link-panel.html',
   styleUrl: './issued-link-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class IssuedLinkPanel {
   readonly issuedLink = input.required<IssuedLink>();
+  readonly timeZone = input.required<string>();
   readonly copied = output<boolean>();
   readonly dismissed = output<void>();
 

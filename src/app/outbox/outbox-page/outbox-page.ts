@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, inject, OnInit } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { Store } from '@ngrx/store';
+import { authFeature } from '@app/auth/state/auth.feature';
 import { MailPreview } from '../mail-preview/mail-preview';
 import { OutboxTable } from '../outbox-table/outbox-table';
 import { OutboxPageActions } from '../state/outbox-page.actions';
@@ -24,7 +25,7 @@ import { outboxFeature } from '../state/outbox.feature';
       } @else if (loadError(); as error) {
         <p class="cw-form-error" role="alert">{{ error }}</p>
       } @else {
-        <cw-outbox-table [messages]="messages()" (messageOpened)="open($event)" (retryClicked)="retry($event)" />
+        <cw-outbox-table [messages]="messages()" [timeZone]="timeZone()" (messageOpened)="open($event)" (retryClicked)="retry($event)" />
       }
     </section>
   `,
@@ -40,6 +41,7 @@ export class OutboxPage implements OnInit {
   protected readonly loading = this.store.selectSignal(outboxFeature.selectLoading);
   protected readonly loadError = this.store.selectSignal(outboxFeature.selectLoadError);
   protected readonly opened = this.store.selectSignal(outboxFeature.selectOpened);
+  protected readonly timeZone = this.store.selectSignal(authFeature.selectCoopTimeZone);
 
   ngOnInit(): void {
     this.store.dispatch(OutboxPageActions.opened());

@@ -1,13 +1,14 @@
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
 import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
 import { RouterLink } from '@angular/router';
 import { ReferenceTableSummary } from '@shared/reference-tables';
+import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 
 /** The uploaded tables, and (for brewers) the choice of which one the lab analysis reads. */
 @Component({
   selector: 'cw-reference-table-list',
-  imports: [DatePipe, DecimalPipe, RouterLink, MatRadioGroup, MatRadioButton],
+  imports: [ZonedDateTimePipe, DecimalPipe, RouterLink, MatRadioGroup, MatRadioButton],
   templateUrl: './reference-table-list.html',
   styleUrl: './reference-table-list.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -16,5 +17,6 @@ export class ReferenceTableList {
   readonly tables = input.required<ReferenceTableSummary[]>();
   readonly labTableId = input<number | null>(null);
   readonly canChoose = input(false);
+  readonly timeZone = input.required<string>();
   readonly labTableChosen = output<number | null>();
 }

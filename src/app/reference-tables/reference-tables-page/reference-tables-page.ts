@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component, inject, OnInit } from '@angular/core';
 import { Store } from '@ngrx/store';
+import { authFeature } from '@app/auth/state/auth.feature';
 import { BuiltinTable } from '../builtin-table/builtin-table';
 import { ReferenceTableList } from '../reference-table-list/reference-table-list';
 import { TableUpload } from '../reference-tables-client';
@@ -20,7 +21,7 @@ import { TableUploadForm } from '../table-upload-form/table-upload-form';
       @if (v.loadError; as message) {
         <p class="cw-form-error" role="alert">{{ message }}</p>
       }
-      <cw-reference-table-list [tables]="v.tables" [labTableId]="v.labTableId" [canChoose]="v.canKeep" (labTableChosen)="chooseLabTable($event)" />
+      <cw-reference-table-list [tables]="v.tables" [labTableId]="v.labTableId" [canChoose]="v.canKeep" [timeZone]="timeZone()" (labTableChosen)="chooseLabTable($event)" />
       @if (v.canKeep) {
         <cw-table-upload-form [uploading]="v.uploading" [error]="v.uploadError" [problems]="v.uploadProblems" (submitted)="uploadTable($event)" />
       }
@@ -32,6 +33,7 @@ import { TableUploadForm } from '../table-upload-form/table-upload-form';
 export class ReferenceTablesPage implements OnInit {
   private readonly store = inject(Store);
   protected readonly vm = this.store.selectSignal(selectReferenceTablesPageViewModel);
+  protected readonly timeZone = this.store.selectSignal(authFeature.selectCoopTimeZone);
 
   ngOnInit(): void {
     this.store.dispatch(ReferenceTablesPageActions.opened());

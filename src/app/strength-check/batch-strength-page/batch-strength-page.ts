@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, inject, input, OnInit } from '@angu
 import { RouterLink } from '@angular/router';
 import { Store } from '@ngrx/store';
 import { DistillateAnalysisRequest, SignOffRequest } from '@shared/strength-check';
+import { authFeature } from '@app/auth/state/auth.feature';
 import { DeclaredStrengthForm } from '../declared-strength-form/declared-strength-form';
 import { DistillateForm } from '../distillate-form/distillate-form';
 import { SignOffList } from '../sign-off-list/sign-off-list';
@@ -22,6 +23,7 @@ export class BatchStrengthPage implements OnInit {
   readonly batchId = input.required<string>();
   protected readonly vm = this.store.selectSignal(selectBatchStrengthPageViewModel);
   protected readonly id = () => Number(this.batchId());
+  protected readonly timeZone = this.store.selectSignal(authFeature.selectCoopTimeZone);
 
   ngOnInit(): void {
     this.store.dispatch(BatchStrengthPageActions.opened({ batchId: this.id() }));
