@@ -11,7 +11,7 @@ import { ReceiveLotDialog, ReceiveLotDialogData } from '../receive-lot-dialog/re
 import { ReorderLevelDialog } from '../reorder-level-dialog/reorder-level-dialog';
 import { LotHistoryDialog, LotHistoryDialogData } from '../lot-history-dialog/lot-history-dialog';
 import { StockClient } from '../stock-client';
-import { localToday } from '../local-today';
+import { coopToday } from '../coop-today';
 import { StockApiActions } from './stock-api.actions';
 import { StockDialogsActions } from './stock-dialogs.actions';
 import { stockFeature } from './stock.feature';
@@ -24,9 +24,9 @@ export const openReceiveLot = createEffect(
   (actions$ = inject(Actions), dialog = inject(MatDialog), store = inject(Store)) =>
     actions$.pipe(
       ofType(StockPageActions.receiveLotClicked),
-      withLatestFrom(store.select(stockFeature.selectIngredients), store.select(stockFeature.selectUnitSystem)),
-      exhaustMap(([, ingredients, unitSystem]) =>
-        dialog.open<ReceiveLotDialog, ReceiveLotDialogData, ReceiveLotRequest>(ReceiveLotDialog, { ...DIALOG, data: { ingredients, unitSystem, today: localToday() } }).afterClosed(),
+      withLatestFrom(store.select(stockFeature.selectIngredients), store.select(stockFeature.selectUnitSystem), store.select(authFeature.selectCoopTimeZone)),
+      exhaustMap(([, ingredients, unitSystem, zone]) =>
+        dialog.open<ReceiveLotDialog, ReceiveLotDialogData, ReceiveLotRequest>(ReceiveLotDialog, { ...DIALOG, data: { ingredients, unitSystem, today: coopToday(zone) } }).afterClosed(),
       ),
       filter((request): request is ReceiveLotRequest => !!request),
       map((request) => StockDialogsActions.receiveLotSubmitted({ request })),

@@ -1,11 +1,13 @@
 import { inject } from '@angular/core';
+import { Store } from '@ngrx/store';
 import { Actions, createEffect, ofType } from '@ngrx/effects';
-import { catchError, EMPTY, map, of, switchMap, tap } from 'rxjs';
+import { catchError, EMPTY, map, of, switchMap, tap, withLatestFrom } from 'rxjs';
+import { authFeature } from '@app/auth/state/auth.feature';
 import { addDays, STOCK_LIMITS } from '@shared/stock';
 import { apiErrorMessage, apiFieldErrors } from '@app/core/api-error-message';
 import { Notifier } from '@app/core/notifier';
 import { ingredientChoices } from '../ingredient-choice';
-import { localToday } from '../local-today';
+import { coopToday } from '../coop-today';
 import { StockClient } from '../stock-client';
 import { loadUnitsOn } from './load-units';
 import { ShoppingListPageActions } from './shopping-list-page.actions';
@@ -49,10 +51,15 @@ function horizonRefusal(error: unknown): string {
 }
 
 export const loadShoppingList = createEffect(
-  (actions$ = inject(Actions), client = inject(StockClient)) =>
+  (actions$ = inject(Actions), client = inject(StockClient), store = inject(Store)) =>
     actions$.pipe(
       ofType(ShoppingListPageActions.opened, ShoppingListPageActions.horizonChanged),
-      map((action) => ('from' in action ? action : { from: localToday(), to: addDays(localToday(), STOCK_LIMITS.horizonDefaultDays) })),
+      withLatestFrom(store.select(authFeature.selectCoopTimeZone)),
+      map(([action, zone]) => {
+        if ('from' in action) return action;
+        const today = coopToday(zone);
+        return { from: today, to: addDays(today, STOCK_LIMITS.horizonDefaultDays) };
+      }),
       switchMap(({ from, to }) =>
         client.shoppingList(from, to).pipe(
           map((list) => StockApiActions.shoppingListLoadedSuccess({ list })),
