@@ -21,8 +21,11 @@ export const strengthCheckPage = {
 
 /** The Reference tables area: upload, audit and correction. */
 export const referenceTablesPage = {
+  /** Opens the page once its list of uploaded tables has arrived, so the form below stops moving. */
   async open(page: Page): Promise<void> {
+    const listed = page.waitForResponse((res) => new URL(res.url()).pathname === '/api/reference-tables' && res.request().method() === 'GET');
     await page.goto('/reference-tables');
+    await listed;
     await page.getByRole('heading', { level: 1, name: 'Reference tables' }).waitFor();
   },
 
