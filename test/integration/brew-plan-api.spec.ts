@@ -63,7 +63,7 @@ describe('Brew plan API', () => {
   });
 
   it('when the slot was taken meanwhile, then accepting answers 409 naming the booking and stores no batch', async () => {
-    const { client } = await brewer();
+    const { client, user } = await brewer();
     const recipe = await createAleRecipe(t.db, client);
     const item = await createSizedFermenter(t.db, 1998);
     const week = mondayInWeeks(zone, 4);
@@ -71,7 +71,9 @@ describe('Brew plan API', () => {
     const other = await brewer();
     const taken = await other.client.send('post', '/api/bookings', { kitItemId: item.id, start: `${week}T10:00`, end: `${week}T12:00` });
     expect(taken.status).toBe(201);
-    const batchesBefore = (await t.db('batches').count<{ n: number }[]>({ n: '*' }))[0].n;
+    // Other spec files create batches meanwhile: count only this brewer's.
+    const mine = async () => (await t.db('batches').where({ brewer_user_id: user.id }).count<{ n: number }[]>({ n: '*' }))[0].n;
+    const batchesBefore = await mine();
 
     const res = await client.send('post', '/api/brew-plan/batches', acceptBody(recipe, item.id, proposal.brewDate, 1998));
 
@@ -79,7 +81,7 @@ describe('Brew plan API', () => {
     expect(res.body.error.code).toBe('booking-conflict');
     expect(res.body.error.details.conflict).toMatchObject({ kind: 'booking', id: taken.body.id });
     expect(res.body.error.message).toContain(`booking #${taken.body.id}`);
-    expect((await t.db('batches').count<{ n: number }[]>({ n: '*' }))[0].n).toBe(batchesBefore);
+    expect(await mine()).toBe(batchesBefore);
     expect(await t.db('bookings').where({ kit_item_id: item.id })).toHaveLength(1);
   });
 
