@@ -1,13 +1,14 @@
 import type { Knex } from 'knex';
 import { DateTime } from 'luxon';
 import { BrewSchedule, heldEnd, placeSchedule } from '../shared/brew-plan';
+import { coopTimeZoneFrom } from '../server/config';
 import { recipesRepository } from '../server/recipes/recipes.repository';
 import { predictVersion } from '../server/recipes/version-prediction';
 
 // The demo co-op's brew plan (invented): the planned mild gets its schedule and fermenter booking,
 // two more batches are planned in the coming weeks, the fermenting pale's brewer booked F1 for four
 // weeks (so the gravity forecast shows it freeing up early), and F4 has a maintenance block.
-const ZONE = process.env.COOP_TIME_ZONE ?? 'Europe/Berlin'; // the config's default zone
+const ZONE = coopTimeZoneFrom();
 const TURNAROUND_HOURS = 24;
 
 interface PlannedDemo { recipe: string; brewer: string; fermenter: string; weeksAhead: number; schedule: BrewSchedule }

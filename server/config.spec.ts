@@ -1,4 +1,4 @@
-import { loadConfig } from './config';
+import { coopTimeZoneFrom, loadConfig } from './config';
 
 describe('loadConfig', () => {
   const minimal = { DB_PASSWORD: 'secret', SESSION_SECRET: 'x'.repeat(32) };
@@ -19,6 +19,12 @@ describe('loadConfig', () => {
   it('when COOP_TIME_ZONE is not an IANA zone, then it is refused; a valid one is kept', () => {
     expect(() => loadConfig({ ...minimal, COOP_TIME_ZONE: 'Mars/Olympus' })).toThrow(/COOP_TIME_ZONE/);
     expect(loadConfig({ ...minimal, COOP_TIME_ZONE: 'Europe/Dublin' }).coopTimeZone).toBe('Europe/Dublin');
+  });
+
+  it('when the seeds read the co-op zone alone, then they get what the server would, without its secrets', () => {
+    expect(coopTimeZoneFrom({})).toBe(loadConfig(minimal).coopTimeZone);
+    expect(coopTimeZoneFrom({ COOP_TIME_ZONE: 'Europe/Dublin' })).toBe('Europe/Dublin');
+    expect(() => coopTimeZoneFrom({ COOP_TIME_ZONE: 'Mars/Olympus' })).toThrow();
   });
 
   it('when TRUST_PROXY is a hop count or a list of addresses, then exactly those proxies are trusted; true is refused', () => {

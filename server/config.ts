@@ -7,6 +7,11 @@ const booleanFlag = z
   .default('false')
   .transform((value) => value === 'true' || value === '1');
 
+const coopTimeZoneSchema = z
+  .string()
+  .default('Europe/Berlin')
+  .refine((zone) => IANAZone.isValidZone(zone), 'an IANA time zone such as Europe/Berlin');
+
 const configSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   HOST: z.string().min(1).default('127.0.0.1'),
@@ -22,10 +27,7 @@ const configSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   TRUST_PROXY: trustProxySchema,
   CLIENT_DIST: z.string().default('dist/commonwort/browser'),
-  COOP_TIME_ZONE: z
-    .string()
-    .default('Europe/Berlin')
-    .refine((zone) => IANAZone.isValidZone(zone), 'an IANA time zone such as Europe/Berlin'),
+  COOP_TIME_ZONE: coopTimeZoneSchema,
   STRIPE_SECRET_KEY: z.string().regex(/^sk_(test|live)_\w+$/, 'a Stripe secret key (sk_test_… or sk_live_…)').default('sk_test_commonwort_local'),
   STRIPE_API_HOST: z.string().min(1).optional(),
   STRIPE_API_PORT: z.coerce.number().int().min(1).max(65535).optional(),
@@ -92,4 +94,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, secure: e.SMTP_SECURE, user: e.SMTP_USER || undefined, password: e.SMTP_PASSWORD || undefined, from: e.MAIL_FROM },
     mailDispatchSeconds: e.MAIL_DISPATCH_SECONDS,
   };
+}
+
+/** The co-op's zone alone, as the server reads it: seeds run without the server's secrets. */
+export function coopTimeZoneFrom(env: NodeJS.ProcessEnv = process.env): string {
+  return coopTimeZoneSchema.parse(env.COOP_TIME_ZONE);
 }

@@ -14,6 +14,12 @@ describe('ZonedDateTimePipe', () => {
     expect(pipe.transform('2026-12-02T20:30:00.000Z', 'Pacific/Auckland', 'date')).toBe('3 Dec 2026');
   });
 
+  // IANA tz database: America/New_York is UTC−5 in December, so 02:30 UTC is still the day before there.
+  it('shows the wall-clock time there in numeric form, as the gravity log lists it', () => {
+    expect(pipe.transform('2026-12-02T13:30:00.000Z', 'Europe/Berlin', 'numeric')).toBe('2026-12-02 14:30');
+    expect(pipe.transform('2026-12-02T02:30:00Z', 'America/New_York', 'numeric')).toBe('2026-12-01 21:30');
+  });
+
   it('shows a dash for a missing instant', () => {
     expect(pipe.transform(null, 'UTC')).toBe('—');
   });

@@ -3,6 +3,7 @@ import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angula
 import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** The e-mail address of the account whose password was forgotten. */
 @Component({
@@ -21,13 +22,7 @@ export class ForgotPasswordForm {
   });
 
   protected submit(): void {
-    if (this.pending()) {
-      return;
-    }
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form, this.pending())) return;
     this.submitted.emit(this.form.getRawValue().email.trim());
   }
 }

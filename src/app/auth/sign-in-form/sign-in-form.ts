@@ -6,6 +6,7 @@ import { MatInput } from '@angular/material/input';
 import { SignInRequest } from '@shared/auth';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
 import { retryAfterText } from '../retry-after-text';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** E-mail and password, checked at the field before they are sent. */
 @Component({
@@ -36,13 +37,7 @@ export class SignInForm {
 
   protected submit(): void {
     // The button stays enabled (and focused) while waiting; a second press is simply ignored.
-    if (this.pending()) {
-      return;
-    }
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form, this.pending())) return;
     const { email, password } = this.form.getRawValue();
     this.submitted.emit({ email: email.trim(), password });
   }

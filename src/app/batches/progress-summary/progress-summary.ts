@@ -2,12 +2,12 @@ import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { BatchProgress } from '@shared/batches';
 import { FermentationFlags } from '../fermentation-flags/fermentation-flags';
-import { CoopTimePipe } from '../coop-time-pipe';
+import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 
 /** Latest gravity, apparent attenuation and ABV so far, with the finished/stuck flags. */
 @Component({
   selector: 'cw-progress-summary',
-  imports: [DecimalPipe, FermentationFlags, CoopTimePipe],
+  imports: [DecimalPipe, FermentationFlags, ZonedDateTimePipe],
   templateUrl: './progress-summary.html',
   styleUrl: './progress-summary.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

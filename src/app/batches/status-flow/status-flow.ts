@@ -11,7 +11,7 @@ import { MatTimepicker, MatTimepickerInput, MatTimepickerToggle } from '@angular
 import { DateTime } from 'luxon';
 import { BATCH_STATUS_LABELS, BATCH_STATUSES, BatchStatus, BatchStatusDates, nextStatus } from '@shared/batches';
 import { coopInstant, coopNowPickerValues } from '../coop-date-time';
-import { CoopTimePipe } from '../coop-time-pipe';
+import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 
 /** A move the person chose: to which status, and when it happened (ISO instant) or null for now. */
 export interface ChosenMove {
@@ -24,7 +24,7 @@ export interface ChosenMove {
   selector: 'cw-status-flow',
   imports: [
     ReactiveFormsModule, MatButton, MatCheckbox, MatMenu, MatMenuItem, MatMenuTrigger, MatFormField, MatLabel, MatHint, MatError, MatSuffix, MatInput,
-    MatDatepicker, MatDatepickerInput, MatDatepickerToggle, MatTimepicker, MatTimepickerInput, MatTimepickerToggle, CoopTimePipe,
+    MatDatepicker, MatDatepickerInput, MatDatepickerToggle, MatTimepicker, MatTimepickerInput, MatTimepickerToggle, ZonedDateTimePipe,
   ],
   templateUrl: './status-flow.html',
   styleUrl: './status-flow.scss',

@@ -12,6 +12,7 @@ import { BREW_PLAN_LIMITS, ProposalRequest } from '@shared/brew-plan';
 import { RecipeSummary } from '@shared/recipes';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
 import { onCountChange } from '@app/ui/on-count-change';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** What the brewer asks the planner for, with the name the batch will carry. */
 export interface PlanRequest {
@@ -68,11 +69,7 @@ export class PlanBatchForm {
   }
 
   protected submit(): void {
-    if (this.pending()) return;
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form, this.pending())) return;
     const v = this.form.getRawValue();
     const request: ProposalRequest = { recipeId: v.recipeId!, recipeVersion: v.recipeVersion!, volumeLitres: v.volumeLitres!, wantedWeek: v.wantedWeek!.toISODate()! };
     if (v.fermentationDays !== null) request.fermentationDays = v.fermentationDays;

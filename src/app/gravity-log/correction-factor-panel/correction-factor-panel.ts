@@ -6,12 +6,12 @@ import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { CorrectionFactorRequest } from '@shared/batches';
 import { GravityReading } from '@shared/readings';
-import { CoopTimePipe } from '@app/batches/coop-time-pipe';
+import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 
 /** The batch's refractometer wort correction factor, derived from a refractometer and a hydrometer reading of one sample. */
 @Component({
   selector: 'cw-correction-factor-panel',
-  imports: [DecimalPipe, FormsModule, MatButton, MatFormField, MatLabel, MatSelect, MatOption, CoopTimePipe],
+  imports: [DecimalPipe, FormsModule, MatButton, MatFormField, MatLabel, MatSelect, MatOption, ZonedDateTimePipe],
   template: `
     <p>Wort correction factor: <strong>{{ factor() | number: '1.3-3' }}</strong>. Refractometer readings are divided by it; after pitching they are also corrected for alcohol.</p>
     @if (refractometer().length > 0 && hydrometer().length > 0) {
@@ -20,7 +20,7 @@ import { CoopTimePipe } from '@app/batches/coop-time-pipe';
           <mat-label>Refractometer reading</mat-label>
           <mat-select [ngModel]="refractometerId()" (ngModelChange)="refractometerId.set($event)">
             @for (r of refractometer(); track r.id) {
-              <mat-option [value]="r.id">{{ r.measuredAt | coopTime: coopTimeZone() }} · {{ r.rawValue }} °Bx</mat-option>
+              <mat-option [value]="r.id">{{ r.measuredAt | cwZonedDateTime: coopTimeZone() : 'numeric' }} · {{ r.rawValue }} °Bx</mat-option>
             }
           </mat-select>
         </mat-form-field>
@@ -28,7 +28,7 @@ import { CoopTimePipe } from '@app/batches/coop-time-pipe';
           <mat-label>Hydrometer reading of the same wort</mat-label>
           <mat-select [ngModel]="hydrometerId()" (ngModelChange)="hydrometerId.set($event)">
             @for (r of hydrometer(); track r.id) {
-              <mat-option [value]="r.id">{{ r.measuredAt | coopTime: coopTimeZone() }} · SG {{ r.correctedSg | number: '1.4-4' }}</mat-option>
+              <mat-option [value]="r.id">{{ r.measuredAt | cwZonedDateTime: coopTimeZone() : 'numeric' }} · SG {{ r.correctedSg | number: '1.4-4' }}</mat-option>
             }
           </mat-select>
         </mat-form-field>

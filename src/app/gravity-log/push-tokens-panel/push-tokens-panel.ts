@@ -4,12 +4,12 @@ import { MatButton } from '@angular/material/button';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { IssuedPushToken, PushTokenSummary, READINGS_PUSH_PATH } from '@shared/readings';
-import { CoopTimePipe } from '@app/batches/coop-time-pipe';
+import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 
 /** Tokens a gravity logger pushes readings with: made here, shown once, revoked after asking. */
 @Component({
   selector: 'cw-push-tokens-panel',
-  imports: [FormsModule, MatButton, MatFormField, MatLabel, MatInput, CoopTimePipe],
+  imports: [FormsModule, MatButton, MatFormField, MatLabel, MatInput, ZonedDateTimePipe],
   templateUrl: './push-tokens-panel.html',
   styleUrl: './push-tokens-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

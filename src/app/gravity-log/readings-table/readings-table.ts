@@ -6,7 +6,7 @@ import { MatPaginator, PageEvent } from '@angular/material/paginator';
 import { MatSort, MatSortHeader, Sort } from '@angular/material/sort';
 import { MatCell, MatCellDef, MatColumnDef, MatHeaderCell, MatHeaderCellDef, MatHeaderRow, MatHeaderRowDef, MatNoDataRow, MatRow, MatRowDef, MatTable } from '@angular/material/table';
 import { GravityReading, INSTRUMENT_LABELS, ReadingSortColumn, UNIT_LABELS } from '@shared/readings';
-import { CoopTimePipe } from '@app/batches/coop-time-pipe';
+import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 
 const SOURCE_LABELS = { hand: 'Typed in', file: 'File', push: 'Logger push' } as const;
 
@@ -14,7 +14,7 @@ const SOURCE_LABELS = { hand: 'Typed in', file: 'File', push: 'Logger push' } as
 @Component({
   selector: 'cw-readings-table',
   imports: [
-    DecimalPipe, CoopTimePipe, MatIcon, MatIconButton, MatTable, MatSort, MatSortHeader, MatPaginator, MatColumnDef, MatHeaderCell, MatHeaderCellDef,
+    DecimalPipe, ZonedDateTimePipe, MatIcon, MatIconButton, MatTable, MatSort, MatSortHeader, MatPaginator, MatColumnDef, MatHeaderCell, MatHeaderCellDef,
     MatCell, MatCellDef, MatHeaderRow, MatHeaderRowDef, MatRow, MatRowDef, MatNoDataRow,
   ],
   templateUrl: './readings-table.html',

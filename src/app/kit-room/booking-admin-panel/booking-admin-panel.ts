@@ -5,6 +5,7 @@ import { DateTime } from 'luxon';
 import { Booking, MoveBookingRequest } from '@shared/bookings';
 import { endAfterStart, wallClockOf, wallClockParts } from '../booking-form/booking-form-model';
 import { WallClockFields } from '../wall-clock-fields/wall-clock-fields';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** An admin's view of one booking from the calendar: move it to other times, or cancel it after confirming. */
 @Component({
@@ -45,10 +46,7 @@ export class BookingAdminPanel {
   }
 
   protected move(): void {
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form)) return;
     const value = this.form.getRawValue();
     const request = { start: wallClockOf(value.startDate, value.startTime)!, end: wallClockOf(value.endDate, value.endTime)! };
     this.moveSubmitted.emit({ bookingId: this.booking().id, request });

@@ -13,6 +13,7 @@ import { NamedChoice } from '../named-choice';
 import { WallClockFields } from '../wall-clock-fields/wall-clock-fields';
 import { endAfterStart, wallClockOf } from './booking-form-model';
 import { onCountChange } from '@app/ui/on-count-change';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** Item, start and end (wall-clock, co-op zone) and a note; admins may block the item for maintenance instead. */
 @Component({
@@ -73,11 +74,7 @@ export class BookingForm {
   }
 
   protected submit(): void {
-    if (this.pending()) return;
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form, this.pending())) return;
     const value = this.form.getRawValue();
     this.bookingSubmitted.emit({
       kitItemId: value.kitItemId!,

@@ -6,6 +6,7 @@ import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { KIT_KINDS, KIT_LIMITS, KIT_STATES, KitItemInput, KitItemSummary } from '@shared/kit';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** A register entry: new when `item` is null, otherwise the item's details to change. */
 export interface KitItemSave {
@@ -52,10 +53,7 @@ export class KitItemForm {
   }
 
   protected submit(): void {
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form)) return;
     const value = this.form.getRawValue();
     this.itemSaved.emit({ kitItemId: this.item()?.id ?? null, input: { ...value, code: value.code.trim(), name: value.name.trim() } });
   }

@@ -7,6 +7,7 @@ import { MatInput } from '@angular/material/input';
 import { DateTime } from 'luxon';
 import { KIT_LIMITS, MaintenanceEntry, MaintenanceEntryInput } from '@shared/kit';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** An item's maintenance log, newest first, with the form for a new entry. */
 @Component({
@@ -39,10 +40,7 @@ export class MaintenanceLog {
   }
 
   protected submit(): void {
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form)) return;
     const value = this.form.getRawValue();
     this.entrySubmitted.emit({
       performedOn: value.performedOn!.toFormat('yyyy-MM-dd'),

@@ -9,6 +9,7 @@ import { confirmPasswordValidator } from '@app/auth/confirm-password-validator';
 import { NewPasswordFields } from '@app/auth/new-password-fields/new-password-fields';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
 import { onCountChange } from '@app/ui/on-count-change';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** The current password, then the new one typed twice. */
 @Component({
@@ -39,10 +40,7 @@ export class PasswordChangeForm {
   protected submit(): void {
     if (this.pending()) return;
     this.form.controls.confirm.updateValueAndValidity();
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form)) return;
     const { currentPassword, password } = this.form.getRawValue();
     this.submitted.emit({ currentPassword, newPassword: password });
   }

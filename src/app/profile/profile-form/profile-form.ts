@@ -7,6 +7,7 @@ import { MatInput } from '@angular/material/input';
 import { PERSON_NAME_MAX_LENGTH, Profile, UpdateProfileRequest } from '@shared/profile';
 import { UnitSystem } from '@shared/recipes';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** The person's name and the units recipes are shown in. */
 @Component({
@@ -37,11 +38,7 @@ export class ProfileForm {
   }
 
   protected submit(): void {
-    if (this.pending()) return;
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form, this.pending())) return;
     const { name, unitSystem } = this.form.getRawValue();
     this.submitted.emit({ name: name.trim(), unitSystem });
   }

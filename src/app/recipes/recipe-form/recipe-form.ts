@@ -14,6 +14,7 @@ import { limitIn, minimumIn, recipeFormGroup, recipeRowGroups, SI_LIMITS } from 
 import { ExactAmounts } from './exact-amounts';
 import { rememberDesignAmounts, withExactAmounts } from './exact-design';
 import { designToFormValue, formValueToDesign } from '../view-models/recipe-form-model';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** The recipe as a reactive form in the person's units; emits the design (SI) as it is typed. */
 @Component({
@@ -91,10 +92,7 @@ export class RecipeForm {
   }
 
   protected submit(): void {
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form)) return;
     this.saveSubmitted.emit(this.designFromForm());
   }
 

@@ -5,6 +5,7 @@ import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { DISTILLATE_LIMITS as L, DistillateAnalysisRequest } from '@shared/strength-check';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** A lab distillate analysis of the batch: volumes, the distillate's density and temperature. */
 @Component({
@@ -40,10 +41,7 @@ export class DistillateForm {
   }
 
   protected submit(): void {
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form)) return;
     const v = this.form.getRawValue();
     this.analysed.emit({ batchId: this.batchId(), ...v, distillateDensity: v.distillateDensity! });
   }

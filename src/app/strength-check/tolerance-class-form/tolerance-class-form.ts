@@ -5,6 +5,7 @@ import { MatCheckbox } from '@angular/material/checkbox';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { TOLERANCE_CLASS_LIMITS as L, ToleranceClass, ToleranceClassInput } from '@shared/strength-check';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 
 /** Adds or changes a product class and the tolerance a declared strength of it is held to. */
 @Component({
@@ -42,10 +43,7 @@ export class ToleranceClassForm {
   }
 
   protected submit(): void {
-    if (this.form.invalid) {
-      this.form.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.form)) return;
     const value = this.form.getRawValue();
     this.submitted.emit({ name: value.name.trim(), tolerancePercentVolume: value.tolerancePercentVolume!, note: value.note.trim(), retired: value.retired });
   }
