@@ -121,6 +121,7 @@ describe('Members safeguards in the browser', () => {
     await signInPage.signIn(page, admin.email, admin.password);
     await page.waitForURL(/\/today/);
     await page.goto('/members');
+    await page.getByLabel('Find a member by name or e-mail').fill(admin.email);
     const ownAdmin = page.getByRole('button', { name: 'admin role for Careful Admin' });
 
     await ownAdmin.click();

@@ -21,12 +21,11 @@ export const strengthCheckPage = {
 
 /** The Reference tables area: upload, audit and correction. */
 export const referenceTablesPage = {
-  /** Opens the page once its list of uploaded tables has arrived, so the form below stops moving. */
+  /** Opens the page once its list of uploaded tables is drawn, so the form below stops moving. */
   async open(page: Page): Promise<void> {
-    const listed = page.waitForResponse((res) => new URL(res.url()).pathname === '/api/reference-tables' && res.request().method() === 'GET');
     await page.goto('/reference-tables');
-    await listed;
     await page.getByRole('heading', { level: 1, name: 'Reference tables' }).waitFor();
+    await page.locator('section[aria-labelledby="cw-tables-title"][aria-busy="false"]').waitFor();
   },
 
   async upload(page: Page, name: string, csv: string, fileName = 'table.csv'): Promise<void> {

@@ -104,4 +104,38 @@ describe('MemberTable', () => {
     expect(button(element, 'Deactivate Jonah Weiss').disabled).toBe(true);
     expect(button(element, 'brewer role for Jonah Weiss').disabled).toBe(true);
   });
+
+  const typeSearch = async (element: HTMLElement, text: string) => {
+    const input = element.querySelector<HTMLInputElement>('input[type="search"]')!;
+    input.value = text;
+    input.dispatchEvent(new Event('input'));
+    await fixture.whenStable();
+  };
+
+  it('finds a member by part of the name or e-mail, in any case', async () => {
+    const element = await render([jonah, { ...ada, email: 'ada@kestrel.example' }]);
+
+    await typeSearch(element, 'OKAF');
+    expect([...element.querySelectorAll('tbody th.name')].map((cell) => cell.textContent)).toEqual([expect.stringContaining('Ada Okafor')]);
+    await typeSearch(element, 'Kestrel.Example');
+    expect([...element.querySelectorAll('tbody th.name')].map((cell) => cell.textContent)).toEqual([expect.stringContaining('Ada Okafor')]);
+  });
+
+  it('says that nothing matched when the search finds no one', async () => {
+    const element = await render([jonah, ada]);
+
+    await typeSearch(element, 'zebedee');
+
+    expect(element.querySelectorAll('tbody th.name')).toHaveLength(0);
+    expect(element.querySelector('tbody [role="status"]')?.textContent).toContain('No member matches “zebedee”.');
+  });
+
+  it('shows a large co-op a page at a time, and the search reaches members beyond the first page', async () => {
+    const many = Array.from({ length: 60 }, (_, i) => generateMockMember({ id: 100 + i, name: `Member ${String(i).padStart(2, '0')}`, email: `m${i}@fernhollow.example` }));
+    const element = await render(many);
+
+    expect(element.querySelectorAll('tbody th.name')).toHaveLength(25);
+    await typeSearch(element, 'Member 59');
+    expect([...element.querySelectorAll('tbody th.name')].map((cell) => cell.textContent?.trim())).toEqual(['Member 59']);
+  });
 });

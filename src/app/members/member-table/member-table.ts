@@ -1,7 +1,10 @@
 import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
-import { ChangeDetectionStrategy, Component, computed, input, model, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, model, output, signal } from '@angular/core';
 import { MatButton } from '@angular/material/button';
+import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
+import { MatInput } from '@angular/material/input';
+import { MatPaginator, PageEvent } from '@angular/material/paginator';
 import { Role, ROLES } from '@shared/auth';
 import { Member } from '@shared/members';
 import { SortHeader } from '@app/ui/sort-header/sort-header';
@@ -29,10 +32,17 @@ const SORTABLE: { key: MemberColumn; label: string }[] = [
 const valueOf = (member: Member, column: string): string =>
   column === 'email' ? member.email : column === 'state' ? String(member.active) : member.name;
 
+/** Members whose name or e-mail contains the words typed, in any case. */
+export function matchingMembers(members: readonly Member[], query: string): readonly Member[] {
+  const needle = query.trim().toLocaleLowerCase();
+  if (!needle) return members;
+  return members.filter((member) => `${member.name} ${member.email}`.toLocaleLowerCase().includes(needle));
+}
+
 /** The people of the co-op with their roles, state and the officer's actions on them. */
 @Component({
   selector: 'cw-member-table',
-  imports: [SortHeader, MatButton, MatIcon, ZonedDateTimePipe],
+  imports: [SortHeader, MatButton, MatIcon, MatFormField, MatLabel, MatInput, MatPaginator, ZonedDateTimePipe],
   templateUrl: './member-table.html',
   styleUrl: './member-table.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -49,10 +59,17 @@ export class MemberTable {
   readonly sort = model<TableSort<MemberColumn>>({ column: 'name', direction: 'asc' });
 
   protected readonly sortable = SORTABLE;
+  protected readonly pageSizes = [25, 50, 100];
+  protected readonly query = signal('');
+  protected readonly page = signal({ pageIndex: 0, pageSize: 25 });
+
+  /** A co-op of hundreds stays one page of rows at a time; the search finds anyone across pages. */
+  protected readonly matching = computed(() => sortRows(matchingMembers(this.members(), this.query()), this.sort(), valueOf));
 
   protected readonly rows = computed(() => {
     const saving = this.savingMemberIds();
-    return sortRows(this.members(), this.sort(), valueOf).map((member) => ({
+    const { pageIndex, pageSize } = this.page();
+    return this.matching().slice(pageIndex * pageSize, (pageIndex + 1) * pageSize).map((member) => ({
       member,
       saving: saving.includes(member.id),
       isYou: member.id === this.currentUserId(),
@@ -64,6 +81,15 @@ export class MemberTable {
       })),
     }));
   });
+
+  protected search(query: string): void {
+    this.query.set(query);
+    this.page.update((page) => ({ ...page, pageIndex: 0 }));
+  }
+
+  protected changePage(event: PageEvent): void {
+    this.page.set({ pageIndex: event.pageIndex, pageSize: event.pageSize });
+  }
 
   protected toggleRole(member: Member, role: Role): void {
     const roles = member.roles.includes(role)

@@ -17,6 +17,8 @@ export class ReferenceTableList {
   readonly tables = input.required<ReferenceTableSummary[]>();
   readonly labTableId = input<number | null>(null);
   readonly canChoose = input(false);
+  /** Until the list has arrived, say so rather than "no table yet". */
+  readonly loading = input(false);
   readonly timeZone = input.required<string>();
   readonly labTableChosen = output<number | null>();
 }

@@ -21,7 +21,7 @@ import { TableUploadForm } from '../table-upload-form/table-upload-form';
       @if (v.loadError; as message) {
         <p class="cw-form-error" role="alert">{{ message }}</p>
       }
-      <cw-reference-table-list [tables]="v.tables" [labTableId]="v.labTableId" [canChoose]="v.canKeep" [timeZone]="timeZone()" (labTableChosen)="chooseLabTable($event)" />
+      <cw-reference-table-list [tables]="v.tables" [labTableId]="v.labTableId" [canChoose]="v.canKeep" [loading]="v.loading" [timeZone]="timeZone()" (labTableChosen)="chooseLabTable($event)" />
       @if (v.canKeep) {
         <cw-table-upload-form [uploading]="v.uploading" [error]="v.uploadError" [problems]="v.uploadProblems" (submitted)="uploadTable($event)" />
       }
