@@ -15,6 +15,14 @@ export const duesPage = {
   paidThrough: (page: Page) => page.getByTestId('paid-through'),
 };
 
+export const duesLedgerPage = {
+  async open(page: Page): Promise<void> {
+    await page.goto('/dues/ledger');
+    await page.getByRole('heading', { level: 1, name: 'Dues ledger' }).waitFor();
+    await page.getByRole('heading', { level: 2, name: 'Members' }).waitFor();
+  },
+};
+
 export const outboxPage = {
   async open(page: Page): Promise<void> {
     await page.goto('/outbox');
