@@ -7,6 +7,7 @@ export * from './recipes-api';
 export * from './style-comparison';
 export * from './recipe-prediction-model';
 export * from './recipe-prediction';
+export { MASHED_KINDS } from './recipe-bill';
 export * from './recipe-units';
 export * from './scale-recipe';
 export * from './recipe-test-data';

@@ -1,7 +1,8 @@
 import { BrewhouseSettings } from './brewhouse-settings';
 import { IngredientCatalogue } from './ingredient';
 import { RecipeDesign } from './recipe-design';
-import { MASHED_KINDS, predictRecipe } from './recipe-prediction';
+import { MASHED_KINDS } from './recipe-bill';
+import { predictRecipe } from './recipe-prediction';
 
 /** Where a design is scaled to. */
 export interface ScaleTarget {
