@@ -2,7 +2,10 @@ import { Routes } from '@angular/router';
 import { provideEffects } from '@ngrx/effects';
 import { provideState } from '@ngrx/store';
 import * as catalogueSnackBarEffects from '@app/catalogue/state/catalogue-snack-bar.effects';
-import * as catalogueEffects from '@app/catalogue/state/catalogue.effects';
+import * as catalogueEntriesEffects from '@app/catalogue/state/catalogue-entries.effects';
+import * as catalogueImportEffects from '@app/catalogue/state/catalogue-import.effects';
+import * as catalogueLoadsEffects from '@app/catalogue/state/catalogue-loads.effects';
+import * as stylesBrewhouseEffects from '@app/catalogue/state/styles-brewhouse.effects';
 import { catalogueFeature } from '@app/catalogue/state/catalogue.feature';
 import * as preferencesEffects from './state/preferences.effects';
 import * as recipeArchiveConfirmationEffects from './state/recipe-archive-confirmation.effects';
@@ -30,7 +33,10 @@ export const recipesRoutes: Routes = [
         recipeVersionsEffects,
         preferencesEffects,
         recipesSnackBarEffects,
-        catalogueEffects,
+        catalogueLoadsEffects,
+        catalogueEntriesEffects,
+        catalogueImportEffects,
+        stylesBrewhouseEffects,
         catalogueSnackBarEffects,
       ),
     ],

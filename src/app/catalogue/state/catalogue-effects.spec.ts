@@ -6,7 +6,9 @@ import { CatalogueClient } from '../catalogue-client';
 import { CatalogueApiActions } from './catalogue-api.actions';
 import { CataloguePageActions } from './catalogue-page.actions';
 import { RecipeEditorPageActions } from '@app/recipes/state/recipe-editor-page.actions';
-import { commitImport, loadCatalogue, previewImport, saveEntry } from './catalogue.effects';
+import { saveEntry } from './catalogue-entries.effects';
+import { commitImport, previewImport } from './catalogue-import.effects';
+import { loadCatalogue } from './catalogue-loads.effects';
 
 const actionsOf = (...actions: Action[]) => new Actions(of(...actions));
 const fakeClient = (overrides: Partial<Record<keyof CatalogueClient, (...args: never[]) => Observable<unknown>>>) => overrides as unknown as CatalogueClient;
