@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { AppError } from '../errors/app-error';
 import { bookingConflict } from '../bookings/booking-conflict';
-import { bookingsRepository } from '../bookings/bookings.repository';
+import { bookingLocksRepository } from '../bookings/booking-locks.repository';
 import { batchesRepository } from './batches.repository';
 
 const badFermenter = (reason: string) => new AppError('validation-failed', `Please check these fields: fermenterId.`, 400, { fermenterId: reason });
@@ -18,6 +18,6 @@ export async function checkFermenter(trx: Knex.Transaction, kitItemId: number, b
   if (!holdsFrom) return;
   const holder = await batchesRepository.fermenterHolder(trx, kitItemId, batchId);
   if (holder) throw new AppError('fermenter-busy', `${item.code} holds the batch "${holder.name}" until it is packaged.`, 409, { fermenterId: 'is in use' });
-  const booking = await bookingsRepository.firstHeldFrom(trx, kitItemId, holdsFrom, batchId);
+  const booking = await bookingLocksRepository.firstHeldFrom(trx, kitItemId, holdsFrom, batchId);
   if (booking) throw bookingConflict(booking);
 }

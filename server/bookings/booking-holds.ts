@@ -5,7 +5,7 @@ import { batchesRepository } from '../batches/batches.repository';
 import { AppError } from '../errors/app-error';
 import { kitRepository } from '../kit/kit.repository';
 import { batchHoldConflict, bookingConflict } from './booking-conflict';
-import { bookingsRepository } from './bookings.repository';
+import { bookingLocksRepository } from './booking-locks.repository';
 
 /**
  * Locks the item's row, so every booking of it (and every batch claiming it) is decided one after
@@ -36,6 +36,6 @@ export async function assertItemFree(
 ): Promise<void> {
   const batch = await batchesRepository.fermenterHolder(trx, item.id, options.batchId ?? 0);
   if (batch) throw batchHoldConflict(item.code, batch);
-  const overlap = await bookingsRepository.firstOverlap(trx, item.id, start, until, options.exceptBookingId);
+  const overlap = await bookingLocksRepository.firstOverlap(trx, item.id, start, until, options.exceptBookingId);
   if (overlap) throw bookingConflict(overlap);
 }

@@ -8,6 +8,7 @@ import { assertItemFree, lockBookableItem } from './booking-holds';
 import { bookedFor, linkedBatch } from './booking-party';
 import { BookingNotices } from './booking-notices';
 import { bookingTimes, calendarRange } from './booking-times';
+import { bookingWritesRepository } from './booking-writes.repository';
 import { bookingsRepository } from './bookings.repository';
 import { DuesStanding, everyoneMayBook } from './dues-standing';
 
@@ -62,7 +63,7 @@ export function createBookingsService({ db, coopTimeZone, duesStanding = everyon
         // A maintenance block needs no cleaning after it.
         const until = heldUntil(endsAt, purpose === 'use' ? item.turnaroundHours : 0);
         await assertItemFree(trx, item, startsAt, until, { batchId });
-        const newId = await bookingsRepository.insert(trx, {
+        const newId = await bookingWritesRepository.insert(trx, {
           kitItemId: item.id,
           userId,
           createdByUserId: user.id,
@@ -90,7 +91,7 @@ export function createBookingsService({ db, coopTimeZone, duesStanding = everyon
       await transactionWithRetry(db, async (trx) => {
         const item = await lockBookableItem(trx, existing.kitItemId, existing.purpose);
         await assertItemFree(trx, item, startsAt, until, { exceptBookingId: id, batchId: existing.batchId });
-        await bookingsRepository.moveTimes(trx, id, { startsAt, endsAt, heldUntil: until, timeZone: coopTimeZone });
+        await bookingWritesRepository.moveTimes(trx, id, { startsAt, endsAt, heldUntil: until, timeZone: coopTimeZone });
         await recordAudit(trx, { actorUserId: user.id, action: 'booking-moved', subjectType: 'booking', subjectId: id, detail: { from: existing.startsAt, to: startsAt.toISOString() } });
       });
       return get(id);
@@ -102,7 +103,7 @@ export function createBookingsService({ db, coopTimeZone, duesStanding = everyon
       if (existing.userId !== user.id && !isAdmin(user)) throw forbidden('Only the member who booked, or an admin, may cancel this booking.');
       if (Date.parse(existing.endsAt) <= Date.now()) throw new AppError('booking-ended', 'This booking has ended and stays on record.', 409);
       await db.transaction(async (trx) => {
-        await bookingsRepository.cancel(trx, id, user.id);
+        await bookingWritesRepository.cancel(trx, id, user.id);
         await recordAudit(trx, { actorUserId: user.id, action: 'booking-cancelled', subjectType: 'booking', subjectId: id });
       });
     },

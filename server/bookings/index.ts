@@ -4,4 +4,5 @@ export { createBookingsService, type BookingsService, type BookingsServiceDeps }
 export { everyoneMayBook, type DuesStanding, type DuesStandingResult } from './dues-standing';
 export { createBookingNotices, type BookingNotices } from './booking-notices';
 export { bookingsRepository } from './bookings.repository';
+export { bookingWritesRepository } from './booking-writes.repository';
 export { assertItemFree, lockBookableItem } from './booking-holds';

@@ -8,7 +8,7 @@ import { recordAudit } from '../audit/audit-log';
 import { batchNotFound } from '../batches/batch-access';
 import { dateOnly } from '../batches/batch-mapping';
 import { batchesRepository } from '../batches/batches.repository';
-import { assertItemFree, BookingNotices, BookingsService, bookingsRepository, lockBookableItem } from '../bookings';
+import { assertItemFree, BookingNotices, BookingsService, bookingsRepository, bookingWritesRepository, lockBookableItem } from '../bookings';
 import { AppError } from '../errors/app-error';
 import { predictVersion } from '../recipes/version-prediction';
 import { RecipesService } from '../recipes';
@@ -72,7 +72,7 @@ export function createBrewPlanWrites({ db, coopTimeZone, recipes, bookings, noti
         const until = new Date(heldEnd(placed, item.turnaroundHours));
         await assertItemFree(trx, item, new Date(placed.start), until, { batchId: id });
         await brewPlanRepository.saveSchedule(trx, id, schedule);
-        const bookingId = await bookingsRepository.insert(trx, {
+        const bookingId = await bookingWritesRepository.insert(trx, {
           kitItemId: item.id, userId: user.id, createdByUserId: user.id, purpose: 'use', startsAt: new Date(placed.start), endsAt: new Date(placed.end),
           heldUntil: until, timeZone: coopTimeZone, note: `Brew plan: ${request.name}`, batchId: id,
         });
@@ -99,8 +99,8 @@ export function createBrewPlanWrites({ db, coopTimeZone, recipes, bookings, noti
         const until = new Date(heldEnd(placed, item.turnaroundHours));
         await assertItemFree(trx, item, new Date(placed.start), until, { exceptBookingId: booking?.id, batchId });
         const times = { kitItemId: item.id, startsAt: new Date(placed.start), endsAt: new Date(placed.end), heldUntil: until, timeZone: coopTimeZone };
-        if (booking) await bookingsRepository.reassign(trx, booking.id, times);
-        else await bookingsRepository.insert(trx, { ...times, userId: batch.brewer_user_id, createdByUserId: user.id, purpose: 'use', note: `Brew plan: ${batch.name}`, batchId });
+        if (booking) await bookingWritesRepository.reassign(trx, booking.id, times);
+        else await bookingWritesRepository.insert(trx, { ...times, userId: batch.brewer_user_id, createdByUserId: user.id, purpose: 'use', note: `Brew plan: ${batch.name}`, batchId });
         await brewPlanRepository.saveSchedule(trx, batchId, schedule);
         await batchesRepository.update(trx, batchId, { brew_date: new Date(`${request.brewDate}T00:00:00Z`), fermenter_kit_item_id: item.id });
         await recordAudit(trx, { actorUserId: user.id, action: 'batch-plan-moved', subjectType: 'batch', subjectId: batchId, detail: { from: dateOnly(batch.brew_date), to: request.brewDate, kitItemId: item.id } });
