@@ -15,6 +15,7 @@ import { ensureSystemPackages } from './setup/system-packages';
 const root = join(__dirname, '..');
 const home = join(root, '.data', 'test');
 const report = join(root, 'test-results', 'jest.json');
+const E2E_DATABASE = 'commonwort_e2e';
 
 async function runJestAsync(env: NodeJS.ProcessEnv, extraArgs: string[]): Promise<number> {
   step('Running every test: shared, server, client, integration (real MariaDB) and end-to-end (Chromium)');
@@ -44,6 +45,7 @@ async function main(): Promise<number> {
       NODE_ENV: 'test',
       DB_PORT: String(mariadb.port),
       DB_NAME: 'commonwort_test',
+      E2E_DB_NAME: E2E_DATABASE,
       DB_USER: 'commonwort_test',
       DB_PASSWORD: secrets.dbPassword,
       SESSION_SECRET: secrets.sessionSecret,
@@ -52,13 +54,19 @@ async function main(): Promise<number> {
       CHROMIUM_PATH: '/usr/bin/chromium',
     };
     const config = loadConfig(env);
-    ensureDatabaseAndUser(mariadb, config.db, true);
-    knex = await openMigratedDb(config.db);
-    await knex.destroy();
-    knex = undefined;
     const jestArgs = process.argv.slice(2);
+    const withBrowser = !jestArgs.includes('--selectProjects') || jestArgs.includes('e2e');
+    // The browser journeys get a database of their own: pages list what is stored, and the many
+    // rows the integration specs write meanwhile would only slow them and move their layout.
+    const e2eDb = { ...config.db, database: E2E_DATABASE };
+    for (const db of withBrowser ? [config.db, e2eDb] : [config.db]) {
+      ensureDatabaseAndUser(mariadb, db, true);
+      knex = await openMigratedDb(db);
+      await knex.destroy();
+      knex = undefined;
+    }
     // A run limited to some projects needs the built app only when it includes the browser tests.
-    if (!jestArgs.includes('--selectProjects') || jestArgs.includes('e2e')) buildClientIfStale(root, config.clientDist);
+    if (withBrowser) buildClientIfStale(root, config.clientDist);
     // Jest runs in a child process while the fakes keep answering from this one.
     return await runJestAsync(env, jestArgs);
   } catch (error) {

@@ -7,7 +7,7 @@ import { loadConfig } from '@server/config';
 import { createDb } from '@server/db';
 import { freePort } from '../../../scripts/setup/free-port';
 
-/** The real server with the built app, on a free loopback port, against the test database. */
+/** The real server with the built app, on a free loopback port, against the browser tests' database. */
 export interface E2eServer {
   baseUrl: string;
   db: Knex;
@@ -19,7 +19,8 @@ export interface E2eServer {
 export async function startE2eServer(): Promise<E2eServer> {
   if (!process.env.DB_PASSWORD) throw new Error('End-to-end tests need the test database and the built app: run them with `npm test`.');
   const port = await freePort();
-  const config = loadConfig({ ...process.env, PORT: String(port), HOST: '127.0.0.1' });
+  // The browser tests' own database (made by `npm test`), apart from the integration specs' rows.
+  const config = loadConfig({ ...process.env, DB_NAME: process.env.E2E_DB_NAME ?? process.env.DB_NAME, PORT: String(port), HOST: '127.0.0.1' });
   if (!existsSync(join(config.clientDist, 'index.html'))) throw new Error(`No built app in ${config.clientDist}: run them with \`npm test\`, which builds it.`);
   const db = createDb(config.db);
   // Browser journeys all come from 127.0.0.1 and share the database's counters: a loose address limit.
