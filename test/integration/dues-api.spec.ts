@@ -94,6 +94,25 @@ describe('Dues API against the Stripe fake', () => {
     expect(await t.db('outbox_messages').where({ recipient: user.email, kind: 'dues-renewal' }).count({ n: '*' })).toEqual([{ n: 1 }]);
   });
 
+  it('when the saved card is refused at renewal, then nothing is paid, the paid-through date stays, renewal by card stops and the member is told why once', async () => {
+    const plan = await createPlan(t.db);
+    const { user } = await member();
+    // tok_chargeCustomerFail: the fake's card that can be saved on a customer and is then refused at every charge.
+    const customer = await stripeFakeClient().customers.create({ email: user.email, source: 'tok_chargeCustomerFail' });
+    await t.db('dues_memberships').insert({ user_id: user.id, plan_id: plan.id, paid_through: today(), stripe_customer_id: customer.id, saved_card: 'Visa ending 0341', renew_by_card: true });
+
+    await t.jobs.dues.runRenewals();
+    await t.jobs.dues.runRenewals();
+
+    expect(await t.db('dues_payments').where({ user_id: user.id })).toEqual([]);
+    expect(await paidThroughOf(t.db, user.id)).toBe(today());
+    expect(Boolean((await t.db('dues_memberships').where({ user_id: user.id }).first())!.renew_by_card)).toBe(false);
+    const mails = await t.db('outbox_messages').where({ recipient: user.email, kind: 'dues-renewal' });
+    expect(mails.map((m) => m.subject)).toEqual(['Your dues could not be renewed']);
+    expect(mails[0].text_body).toContain('Nothing was charged');
+    expect((await chargesOfMember(stripeFakeClient(), user.id)).filter((c) => c.status === 'succeeded')).toEqual([]);
+  });
+
   it('when an admin refunds a card payment, then the ledger shows it refunded and the paid-through date steps back', async () => {
     const plan = await createPlan(t.db);
     const { user, client } = await member();
