@@ -1,19 +1,15 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, output, untracked } from '@angular/core';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormControl, FormGroup, NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
-import {
-  FERMENTABLE_KINDS,
-  FLOCCULATION_LEVELS,
-  HOP_FORMS,
-  IngredientKind,
-  OTHER_ADDITION_KINDS,
-} from '@shared/recipes';
+import { IngredientKind } from '@shared/recipes';
+import { readyToSubmit } from '@app/ui/ready-to-submit';
 import { CatalogueEntry, CatalogueEntryInput } from '../catalogue-entry';
 import { EbcPipe } from '../ebc-pipe';
 import { KIND_LABELS } from '../catalogue-columns';
+import { ENTRY_LAYOUTS } from './catalogue-entry-fields';
 import { entryFormGroups, entryInputOf } from './catalogue-entry-form-groups';
 
 /** Adds or changes one catalogue entry; the fields follow the kind. */
@@ -35,7 +31,8 @@ export class CatalogueEntryForm {
   readonly cancelled = output<void>();
 
   protected readonly groups = entryFormGroups(inject(NonNullableFormBuilder));
-  protected readonly options = { FERMENTABLE_KINDS, HOP_FORMS, FLOCCULATION_LEVELS, OTHER_ADDITION_KINDS };
+  protected readonly group = computed((): FormGroup => this.groups[this.kind()]);
+  protected readonly layout = computed(() => ENTRY_LAYOUTS[this.kind()]);
   protected readonly title = computed(() => `${this.entry() ? 'Change' : 'Add'} ${this.entry()?.name ?? 'a ' + KIND_LABELS[this.kind()].singular}`);
 
   constructor() {
@@ -51,12 +48,13 @@ export class CatalogueEntryForm {
     });
   }
 
+  /** The control of the shown kind's group under `name`. */
+  protected control(name: string): FormControl {
+    return this.group().get(name) as FormControl;
+  }
+
   protected submit(): void {
-    const group = this.groups[this.kind()];
-    if (group.invalid) {
-      group.markAllAsTouched();
-      return;
-    }
+    if (!readyToSubmit(this.group())) return;
     this.submitted.emit(entryInputOf(this.kind(), this.groups));
   }
 }
