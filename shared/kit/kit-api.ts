@@ -1,4 +1,4 @@
-import { KitItem, KitKind, KitState } from './kit-item';
+import { KitItem } from './kit-item';
 import { MaintenanceEntry } from './maintenance-entry';
 
 export const KIT_PATH = '/api/kit';
@@ -13,15 +13,8 @@ export const KIT_PATH = '/api/kit';
  *   POST   /api/kit/:kitItemId/maintenance        [admin]  MaintenanceEntryInput → MaintenanceEntry (201)
  */
 
-export interface KitItemInput {
-  code: string;
-  name: string;
-  kind: KitKind;
-  capacityLitres: number | null;
-  state: KitState;
-  turnaroundHours: number;
-  notes: string;
-}
+/** What an admin enters for an item: all of it but the id. */
+export type KitItemInput = Omit<KitItem, 'id'>;
 
 /** An item with the next service due from its log, for the register table. */
 export interface KitItemSummary extends KitItem {
