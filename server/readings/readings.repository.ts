@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { GravityReading, ReadingSortColumn } from '@shared/readings';
 import { GravityReadingRow, ReadingUploadRow } from '../db';
-import { PageReadingRow, ReadingSourceNames } from './reading-page-columns';
+import { PageReadingTuple, ReadingSourceNames, sourceIdsOf } from './reading-page-columns';
 
 /** A reading row with the names of who or what it came from. */
 export interface ReadingRecord extends GravityReadingRow {
@@ -24,15 +24,11 @@ function withSources(db: Knex) {
     .select('gravity_readings.*', 'users.name as created_by_name', 'reading_uploads.file_name as upload_file_name', 'batch_push_tokens.label as push_token_label');
 }
 
-/** DATETIME columns as whole seconds since 1970 (no time zone applies to DATETIME), cheaper to read than dates. */
-const epochSeconds = (db: Knex, column: string) => db.raw("TIMESTAMPDIFF(SECOND, '1970-01-01', ??) as ??", [column, `${column}_s`]);
-
-const pageColumns = (db: Knex) => [
-  'id', epochSeconds(db, 'measured_at'), 'instrument', 'raw_value', 'raw_unit', 'sample_temperature_c', 'calibration_temperature_c', 'correction_factor',
-  'original_brix', 'corrected_sg', 'source', 'upload_id', 'push_token_id', 'note', 'created_by_user_id', epochSeconds(db, 'updated_at'),
+/** The columns of a page, in the order of `PageReadingTuple`. */
+const PAGE_COLUMNS = [
+  'id', 'measured_at', 'instrument', 'raw_value', 'raw_unit', 'sample_temperature_c', 'calibration_temperature_c', 'correction_factor',
+  'original_brix', 'corrected_sg', 'source', 'upload_id', 'push_token_id', 'note', 'created_by_user_id', 'updated_at',
 ];
-
-const distinct = (values: (number | null)[]) => [...new Set(values.filter((v): v is number => v !== null))];
 
 async function namesById(db: Knex, table: 'users' | 'reading_uploads' | 'batch_push_tokens', column: string, ids: number[]): Promise<Map<number, string>> {
   if (!ids.length) return new Map();
@@ -40,11 +36,12 @@ async function namesById(db: Knex, table: 'users' | 'reading_uploads' | 'batch_p
   return new Map(rows.map((r) => [r.id, r.name]));
 }
 
-async function sourceNames(db: Knex, rows: readonly PageReadingRow[]): Promise<ReadingSourceNames> {
+async function sourceNames(db: Knex, rows: readonly PageReadingTuple[]): Promise<ReadingSourceNames> {
+  const ids = sourceIdsOf(rows);
   const [users, uploads, tokens] = await Promise.all([
-    namesById(db, 'users', 'name', distinct(rows.map((r) => r.created_by_user_id))),
-    namesById(db, 'reading_uploads', 'file_name', distinct(rows.map((r) => r.upload_id))),
-    namesById(db, 'batch_push_tokens', 'label', distinct(rows.map((r) => r.push_token_id))),
+    namesById(db, 'users', 'name', ids.users),
+    namesById(db, 'reading_uploads', 'file_name', ids.uploads),
+    namesById(db, 'batch_push_tokens', 'label', ids.tokens),
   ]);
   return { users, uploads, tokens };
 }
@@ -82,7 +79,9 @@ export const readingsRepository = {
         .orderBy([{ column: SORT_COLUMN[page.sort], order: page.direction }, { column: 'id', order: page.direction }])
         .offset(page.offset)
         .limit(page.limit)
-        .select<PageReadingRow[]>(pageColumns(db)),
+        .select<unknown[]>(PAGE_COLUMNS)
+        // Each row as an array and times as text (no object or Date per row): a page may hold a logger's tens of thousands.
+        .options({ rowsAsArray: true, dateStrings: true }) as unknown as Promise<PageReadingTuple[]>,
     ]);
     return { total: Number(total), rows, names: await sourceNames(db, rows) };
   },
