@@ -78,7 +78,7 @@ describe('Recipes in the browser', () => {
     await context.close();
   }, 90_000);
 
-  it('when a member opens a recipe another member shared with the co-op, then they can view and clone it but not edit it', async () => {
+  it('when a member opens a recipe another member keeps private, then it is said once with the way back; once shared, they can view and clone it but not edit it', async () => {
     const owner = await createUser(env.server.db, ['member'], { name: 'Owner Member' });
     const other = await createUser(env.server.db, ['member'], { name: 'Other Member' });
     const ids = await createCatalogueEntries(env.server.db);
@@ -89,14 +89,25 @@ describe('Recipes in the browser', () => {
     await recipeEditorPage.name(page, `Shared mild ${ids.tag}`);
     await recipeEditorPage.addFermentable(page, `Test pale malt ${ids.tag} · grain`, '3');
     await recipeEditorPage.save(page, 1);
-    await page.getByRole('switch', { name: 'Shared with the co-op' }).click();
-    await page.getByText(/· shared with the co-op/).waitFor();
+    await page.waitForURL(/\/recipes\/\d+/);
     const url = page.url();
-    await context.close();
 
     const second = await newPage(env.browser, env.server.baseUrl);
     await signInPage.signIn(second.page, other.email, other.password);
     await second.page.waitForURL(/\/today/);
+    // While it is private the other member is told once, on the page and not again in a snack bar, with the way back.
+    await second.page.goto(new URL(url).pathname);
+    const unavailable = second.page.getByText('No recipe you can see has this id.');
+    await unavailable.waitFor();
+    expect(await unavailable.count()).toBe(1);
+    expect(await second.page.locator('mat-snack-bar-container').count()).toBe(0);
+    expect(await second.page.getByLabel('Recipe name').count()).toBe(0);
+    await second.page.getByRole('link', { name: 'Back to the recipes' }).click();
+    await second.page.getByRole('heading', { level: 1, name: 'Recipes' }).waitFor();
+
+    await page.getByRole('switch', { name: 'Shared with the co-op' }).click();
+    await page.getByText(/· shared with the co-op/).waitFor();
+    await context.close();
     await second.page.goto(new URL(url).pathname);
     await second.page.getByText('only its owner edits it').waitFor();
     expect(await second.page.getByRole('button', { name: 'Save', exact: true }).count()).toBe(0);
