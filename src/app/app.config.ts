@@ -14,6 +14,7 @@ import { authFeature } from './auth/state/auth.feature';
 import { routes } from './app.routes';
 import { apiErrorInterceptor } from './core/api-error-interceptor';
 import { AppErrorHandler } from './core/app-error-handler';
+import { provideCoopDateAdapter } from './ui/coop-date-formats';
 
 export const appConfig: ApplicationConfig = {
   providers: [
@@ -27,6 +28,7 @@ export const appConfig: ApplicationConfig = {
       { runtimeChecks: { strictActionImmutability: isDevMode(), strictStateImmutability: isDevMode() } },
     ),
     provideEffects(authEffects),
+    provideCoopDateAdapter(),
     { provide: ErrorHandler, useClass: AppErrorHandler },
   ],
 };

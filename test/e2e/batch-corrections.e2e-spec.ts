@@ -19,6 +19,8 @@ describe('Correcting a batch and its readings in the browser', () => {
     await page.goto(`/batches/${batchId}`);
     await page.getByRole('button', { name: 'Edit details' }).click();
     const details = page.getByRole('form', { name: 'Batch details' });
+    // Dates are shown as yyyy-MM-dd app-wide, never as a locale's 11/10/2026.
+    expect(await details.getByLabel('Brew day').inputValue()).toMatch(/^\d{4}-\d{2}-\d{2}$/);
     await details.getByLabel('Planned volume').fill('23');
     await details.getByLabel('Batch name').fill('Renamed ale');
     expect(await seriousA11yViolations(page)).toEqual([]);
@@ -29,8 +31,14 @@ describe('Correcting a batch and its readings in the browser', () => {
     expect(await env.server.db('batches').where({ id: batchId }).first()).toMatchObject({ name: 'Renamed ale', planned_volume_litres: '23.00' });
 
     await page.getByRole('checkbox', { name: 'It happened earlier' }).check();
+    // 2026-11-26 read as the 26th of November; a US-style 11/26/2026 is refused as ambiguous.
     await page.getByLabel('Date of the move').fill('11/26/2026');
-    await page.getByLabel('Time of the move').fill('9:15 AM');
+    await page.getByLabel('Date of the move').blur();
+    await page.getByText('Choose the date (yyyy-MM-dd).').waitFor();
+    await page.getByLabel('Date of the move').fill('2026-11-26');
+    await page.getByLabel('Time of the move').fill('09:15');
+    await page.getByLabel('Time of the move').blur();
+    expect(await page.getByLabel('Date of the move').inputValue()).toBe('2026-11-26');
     await page.getByRole('button', { name: 'Move to conditioning' }).click();
     await page.locator('mat-snack-bar-container').getByText(/is now conditioning/).waitFor();
     await dismissSnackBar(page);

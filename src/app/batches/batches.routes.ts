@@ -1,5 +1,4 @@
 import { Routes } from '@angular/router';
-import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
 import { provideEffects } from '@ngrx/effects';
 import { provideState } from '@ngrx/store';
 import * as batchChangesEffects from './state/batch-changes.effects';
@@ -12,7 +11,7 @@ import { stockFeature } from '@app/stock/state/stock.feature';
 export const batchesRoutes: Routes = [
   {
     path: '',
-    providers: [provideLuxonDateAdapter(), provideState(batchesFeature), provideState(stockFeature), provideEffects(batchesEffects, batchChangesEffects, batchesUiEffects, drawEffects)],
+    providers: [provideState(batchesFeature), provideState(stockFeature), provideEffects(batchesEffects, batchChangesEffects, batchesUiEffects, drawEffects)],
     children: [
       { path: '', loadComponent: () => import('./batch-list-page/batch-list-page').then((m) => m.BatchListPage) },
       { path: 'new', title: 'Start a batch · Commonwort', loadComponent: () => import('./batch-start-page/batch-start-page').then((m) => m.BatchStartPage) },

@@ -1,5 +1,4 @@
 import { Routes } from '@angular/router';
-import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
 import { provideEffects } from '@ngrx/effects';
 import { provideState } from '@ngrx/store';
 import { batchesFeature } from '@app/batches/state/batches.feature';
@@ -14,7 +13,6 @@ export const gravityLogRoutes: Routes = [
   {
     path: '',
     providers: [
-      provideLuxonDateAdapter(),
       provideState(readingsFeature),
       provideState(batchesFeature),
       provideEffects(readingsEffects, readingImportEffects, pushTokensEffects, gravityLogUiEffects, batchesEffects),

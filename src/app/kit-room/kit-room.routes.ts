@@ -1,5 +1,4 @@
 import { Routes } from '@angular/router';
-import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
 import { provideEffects } from '@ngrx/effects';
 import { provideState } from '@ngrx/store';
 import { roleGuard } from '@app/auth/role-guard';
@@ -8,7 +7,6 @@ import * as kitRegisterEffects from './state/kit-register.effects';
 import * as kitRoomFeedbackEffects from './state/kit-room-feedback.effects';
 import * as kitRoomEffects from './state/kit-room.effects';
 import { kitRoomFeature } from './state/kit-room.feature';
-import { KIT_ROOM_DATE_FORMATS } from './kit-room-date-formats';
 
 export const kitRoomRoutes: Routes = [
   {
@@ -16,7 +14,6 @@ export const kitRoomRoutes: Routes = [
     providers: [
       provideState(kitRoomFeature),
       provideEffects(kitRoomEffects, feedLinkEffects, kitRegisterEffects, kitRoomFeedbackEffects),
-      provideLuxonDateAdapter(KIT_ROOM_DATE_FORMATS),
     ],
     children: [
       { path: '', loadComponent: () => import('./kit-room-page/kit-room-page').then((m) => m.KitRoomPage) },

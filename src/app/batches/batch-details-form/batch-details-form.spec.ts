@@ -1,5 +1,5 @@
 import { TestBed } from '@angular/core/testing';
-import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
+import { provideCoopDateAdapter } from '@app/ui/coop-date-formats';
 import { Batch, UpdateBatchRequest } from '@shared/batches';
 import { BatchDetailsForm } from './batch-details-form';
 
@@ -9,7 +9,7 @@ const batch = {
 
 describe('BatchDetailsForm', () => {
   it('sends only the fields that changed', async () => {
-    TestBed.configureTestingModule({ imports: [BatchDetailsForm], providers: [provideLuxonDateAdapter()] });
+    TestBed.configureTestingModule({ imports: [BatchDetailsForm], providers: [provideCoopDateAdapter()] });
     const fixture = TestBed.createComponent(BatchDetailsForm);
     fixture.componentRef.setInput('batch', batch);
     fixture.componentRef.setInput('brewers', [{ id: 1, name: 'Test brewer' }, { id: 2, name: 'Other brewer' }]);

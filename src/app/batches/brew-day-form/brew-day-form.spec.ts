@@ -1,5 +1,5 @@
 import { TestBed } from '@angular/core/testing';
-import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
+import { provideCoopDateAdapter } from '@app/ui/coop-date-formats';
 import { BatchPrediction, BrewDayMeasurements } from '@shared/batches';
 import { BrewDayForm } from './brew-day-form';
 
@@ -9,7 +9,7 @@ const predicted: BatchPrediction = { og: 1.051, fg: 1.012, abvEstimate: 5.1, pre
 
 describe('BrewDayForm', () => {
   async function render(plannedLitres: number) {
-    TestBed.configureTestingModule({ providers: [provideLuxonDateAdapter()] });
+    TestBed.configureTestingModule({ providers: [provideCoopDateAdapter()] });
     const fixture = TestBed.createComponent(BrewDayForm);
     fixture.componentRef.setInput('measured', measured);
     fixture.componentRef.setInput('predicted', predicted);

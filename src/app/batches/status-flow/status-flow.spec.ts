@@ -1,5 +1,5 @@
 import { TestBed } from '@angular/core/testing';
-import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
+import { provideCoopDateAdapter } from '@app/ui/coop-date-formats';
 import { BATCH_STATUSES, BatchStatusDates } from '@shared/batches';
 import { ChosenMove, StatusFlow } from './status-flow';
 
@@ -7,7 +7,7 @@ const noDates = Object.fromEntries(BATCH_STATUSES.map((s) => [s, null])) as Batc
 
 describe('StatusFlow', () => {
   async function render() {
-    TestBed.configureTestingModule({ imports: [StatusFlow], providers: [provideLuxonDateAdapter()] });
+    TestBed.configureTestingModule({ imports: [StatusFlow], providers: [provideCoopDateAdapter()] });
     const fixture = TestBed.createComponent(StatusFlow);
     fixture.componentRef.setInput('status', 'planned');
     fixture.componentRef.setInput('dates', noDates);
@@ -25,15 +25,15 @@ describe('StatusFlow', () => {
     expect(moves).toEqual([{ status: 'brewing', at: null }]);
   });
 
-  it('records a back-dated move at the date and time typed on the co-op clocks', async () => {
+  it('records a back-dated move at the date (yyyy-MM-dd) and 24-hour time typed on the co-op clocks', async () => {
     const { fixture, element, moves } = await render();
     element.querySelector<HTMLInputElement>('mat-checkbox input')!.click();
     await fixture.whenStable();
     const date = element.querySelector<HTMLInputElement>('.when input[formcontrolname="date"]')!;
-    date.value = '11/20/2026';
+    date.value = '2026-11-20';
     date.dispatchEvent(new Event('input'));
     const time = element.querySelector<HTMLInputElement>('.when input[formcontrolname="time"]')!;
-    time.value = '8:30 AM';
+    time.value = '08:30';
     time.dispatchEvent(new Event('input'));
     await fixture.whenStable();
     element.querySelector<HTMLButtonElement>('.moves button')!.click();

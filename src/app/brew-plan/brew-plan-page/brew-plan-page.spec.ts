@@ -1,5 +1,5 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
+import { provideCoopDateAdapter } from '@app/ui/coop-date-formats';
 import { provideRouter } from '@angular/router';
 import { MockStore, provideMockStore } from '@ngrx/store/testing';
 import { BrewPlanTimeline, SlotProposals } from '@shared/brew-plan';
@@ -33,7 +33,7 @@ describe('BrewPlanPage', () => {
       imports: [BrewPlanPage],
       providers: [
         provideRouter([]),
-        provideLuxonDateAdapter(),
+        provideCoopDateAdapter(),
         provideMockStore({
           initialState: {
             auth: { ...initialAuthState, sessionLoaded: true, coopTimeZone: 'Europe/Berlin', user: generateMockSessionUser(roles, { id: 7 }) },

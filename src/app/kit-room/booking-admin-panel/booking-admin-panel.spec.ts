@@ -1,9 +1,8 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
+import { provideCoopDateAdapter } from '@app/ui/coop-date-formats';
 import { DateTime } from 'luxon';
 import { MoveBookingRequest } from '@shared/bookings';
 import { generateMockBooking } from '@app/testing/booking-mock';
-import { KIT_ROOM_DATE_FORMATS } from '../kit-room-date-formats';
 import { BookingAdminPanel } from './booking-admin-panel';
 
 describe('BookingAdminPanel', () => {
@@ -15,7 +14,7 @@ describe('BookingAdminPanel', () => {
   beforeEach(async () => {
     moves.length = 0;
     cancels.length = 0;
-    TestBed.configureTestingModule({ providers: [provideLuxonDateAdapter(KIT_ROOM_DATE_FORMATS)] });
+    TestBed.configureTestingModule({ providers: [provideCoopDateAdapter()] });
     fixture = TestBed.createComponent(BookingAdminPanel);
     fixture.componentRef.setInput('booking', generateMockBooking());
     fixture.componentRef.setInput('today', DateTime.fromISO('2026-12-02', { zone: 'Europe/Berlin' }));

@@ -1,5 +1,5 @@
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
+import { provideCoopDateAdapter } from '@app/ui/coop-date-formats';
 import { provideRouter } from '@angular/router';
 import { MockStore, provideMockStore } from '@ngrx/store/testing';
 import { initialAuthState } from '@app/auth/state/auth.feature';
@@ -18,7 +18,7 @@ describe('KitRoomPage', () => {
       imports: [KitRoomPage],
       providers: [
         provideRouter([]),
-        provideLuxonDateAdapter(),
+        provideCoopDateAdapter(),
         provideMockStore({
           initialState: {
             auth: { ...initialAuthState, sessionLoaded: true, coopTimeZone: 'Europe/Berlin', user: generateMockSessionUser(['member'], { id: 7 }) },

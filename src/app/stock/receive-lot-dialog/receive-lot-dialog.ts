@@ -3,9 +3,11 @@ import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogActions, MatDialogClose, MatDialogContent, MatDialogRef, MatDialogTitle } from '@angular/material/dialog';
-import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import { MatDatepicker, MatDatepickerInput, MatDatepickerToggle } from '@angular/material/datepicker';
+import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOptgroup, MatOption, MatSelect } from '@angular/material/select';
+import { DateTime } from 'luxon';
 import { UnitSystem } from '@shared/recipes';
 import { entryUnitsFor, ReceiveLotRequest, STOCK_LIMITS, StockEntryUnit, toStockQuantity } from '@shared/stock';
 import { IngredientChoice } from '../ingredient-choice';
@@ -22,7 +24,7 @@ const KIND_LABELS = { fermentables: 'Fermentables', hops: 'Hops', yeasts: 'Yeast
 /** Records a delivery: which ingredient, how much in the person's units, when it came and keeps until. */
 @Component({
   selector: 'cw-receive-lot-dialog',
-  imports: [ReactiveFormsModule, MatDialogTitle, MatDialogContent, MatDialogActions, MatDialogClose, MatButton, MatFormField, MatLabel, MatError, MatHint, MatInput, MatSelect, MatOption, MatOptgroup],
+  imports: [ReactiveFormsModule, MatDialogTitle, MatDialogContent, MatDialogActions, MatDialogClose, MatButton, MatFormField, MatLabel, MatError, MatHint, MatInput, MatSelect, MatOption, MatOptgroup, MatSuffix, MatDatepicker, MatDatepickerInput, MatDatepickerToggle],
   templateUrl: './receive-lot-dialog.html',
   styleUrl: '../stock-dialog.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -39,8 +41,8 @@ export class ReceiveLotDialog {
     ingredientId: [null as number | null, Validators.required],
     quantity: [null as number | null, [Validators.required, stockQuantityValidator(() => this.entryUnit())]],
     entryUnit: [null as StockEntryUnit | null, Validators.required],
-    receivedOn: [this.data.today, Validators.required],
-    bestBefore: [''],
+    receivedOn: [DateTime.fromISO(this.data.today) as DateTime | null, Validators.required],
+    bestBefore: [null as DateTime | null],
     supplierNote: ['', Validators.maxLength(STOCK_LIMITS.supplierNoteMaxLength)],
   });
 
@@ -63,14 +65,15 @@ export class ReceiveLotDialog {
   }
 
   protected receive(): void {
-    const bestBefore = this.form.controls.bestBefore.value;
-    if (bestBefore && bestBefore < this.form.controls.receivedOn.value) this.form.controls.bestBefore.setErrors({ beforeReceived: true });
+    const receivedOn = this.form.controls.receivedOn.value?.toISODate() ?? '';
+    const bestBefore = this.form.controls.bestBefore.value?.toISODate() ?? null;
+    if (bestBefore && bestBefore < receivedOn) this.form.controls.bestBefore.setErrors({ beforeReceived: true });
     if (this.form.invalid) {
       this.form.markAllAsTouched();
       return;
     }
     const value = this.form.getRawValue();
     const { unit, quantity } = toStockQuantity(value.quantity!, value.entryUnit!);
-    this.ref.close({ ingredientId: value.ingredientId!, unit, quantity, receivedOn: value.receivedOn, bestBefore: bestBefore || null, supplierNote: value.supplierNote.trim() });
+    this.ref.close({ ingredientId: value.ingredientId!, unit, quantity, receivedOn, bestBefore, supplierNote: value.supplierNote.trim() });
   }
 }
