@@ -66,7 +66,7 @@ export async function benchBrewPlan(root: string): Promise<void> {
     const load = () => loadPlanCalendar(db, from, to);
     const compute = async () => {
       const calendar = await load();
-      const busy = planningBusy(calendar, occupancies(calendar.batches, new Map(), zone, now));
+      const busy = planningBusy(calendar, occupancies(calendar.batches, new Map(), zone, now), new Map());
       found = proposeSlots({ fermenters: calendar.fermenters, busy, volumeLitres: 40, schedule, wantedWeek, zone, notBefore: now, notAfter: now + BOOKING_LIMITS.maxDaysAhead * DAY_MS, searchDays: BREW_PLAN_LIMITS.searchWeeks * 7, limit: 6 }).length;
     };
     const api = async () => {

@@ -23,19 +23,26 @@ export async function lockBookableItem(trx: Knex.Transaction, kitItemId: number,
   return item;
 }
 
+/** When the batch holding a fermenter is expected to hand it back (ms), or null: only when packaged. */
+export type HolderRelease = (holderId: number) => Promise<number | null>;
+
 /**
  * Refuses a hold of [start, until) that meets another booking's hold, or a fermenter that a
- * fermenting or conditioning batch holds (except the batch the booking serves). Call under the lock.
+ * fermenting or conditioning batch holds (except the batch the booking serves). The kit room keeps
+ * the hold until packaging; the brew plan passes `holderRelease` and may book from its expected
+ * release on, past its own booking. Call under the lock.
  */
 export async function assertItemFree(
   trx: Knex.Transaction,
   item: KitItem,
   start: Date,
   until: Date,
-  options: { exceptBookingId?: number; batchId?: number | null } = {},
+  options: { exceptBookingId?: number; batchId?: number | null; holderRelease?: HolderRelease } = {},
 ): Promise<void> {
   const batch = await batchesRepository.fermenterHolder(trx, item.id, options.batchId ?? 0);
-  if (batch) throw batchHoldConflict(item.code, batch);
-  const overlap = await bookingLocksRepository.firstOverlap(trx, item.id, start, until, options.exceptBookingId);
+  const release = batch && options.holderRelease ? await options.holderRelease(batch.id) : null;
+  if (batch && (release === null || start.getTime() < release)) throw batchHoldConflict(item.code, batch);
+  // A released holder's own booking counted on its planned end; its expected release replaces it.
+  const overlap = await bookingLocksRepository.firstOverlap(trx, item.id, start, until, options.exceptBookingId, batch?.id);
   if (overlap) throw bookingConflict(overlap);
 }

@@ -7,8 +7,8 @@ import { liveBookings, toBooking } from './booking-records';
  * other transactions have committed since this one began, and hold those rows until it ends.
  */
 export const bookingLocksRepository = {
-  /** The first live booking of the item whose hold overlaps [start, heldUntil). */
-  async firstOverlap(trx: Knex.Transaction, kitItemId: number, start: Date, heldUntil: Date, exceptId?: number): Promise<Booking | null> {
+  /** The first live booking of the item whose hold overlaps [start, heldUntil), other than `exceptId` and those serving `exceptBatchId`. */
+  async firstOverlap(trx: Knex.Transaction, kitItemId: number, start: Date, heldUntil: Date, exceptId?: number, exceptBatchId?: number): Promise<Booking | null> {
     const query = liveBookings(trx)
       .where('bookings.kit_item_id', kitItemId)
       .where('bookings.starts_at', '<', heldUntil)
@@ -16,6 +16,7 @@ export const bookingLocksRepository = {
       .orderBy('bookings.starts_at')
       .forShare();
     if (exceptId) query.whereNot('bookings.id', exceptId);
+    if (exceptBatchId) query.where((q) => q.whereNull('bookings.batch_id').orWhereNot('bookings.batch_id', exceptBatchId));
     const row = await query.first();
     return row ? toBooking(row) : null;
   },

@@ -5,4 +5,4 @@ export { everyoneMayBook, type DuesStanding, type DuesStandingResult } from './d
 export { createBookingNotices, type BookingNotices } from './booking-notices';
 export { bookingsRepository } from './bookings.repository';
 export { bookingWritesRepository } from './booking-writes.repository';
-export { assertItemFree, lockBookableItem } from './booking-holds';
+export { assertItemFree, lockBookableItem, type HolderRelease } from './booking-holds';

@@ -5,13 +5,17 @@ import { acceptSlotSchema, movePlannedBatchSchema, proposalSchema, timelineQuery
 import { BrewPlanReads } from './brew-plan.service';
 import { BrewPlanWrites } from './plan-writes';
 
-/** /api/brew-plan: every member reads the timeline; admins and brewers plan. */
+/** /api/brew-plan: every member reads the timeline; admins and brewers plan; admins may plan for another brewer. */
 export function createBrewPlanRouter(reads: BrewPlanReads, writes: BrewPlanWrites): Router {
   const router = Router();
 
   router.get('/timeline', signedIn, async (req, res) => {
     const { from, weeks } = parseRequest(timelineQuerySchema, req.query);
     res.json(await reads.timeline(from, weeks));
+  });
+
+  router.get('/brewers', requireRole('admin'), async (_req, res) => {
+    res.json(await reads.brewers());
   });
 
   router.post('/proposals', requireRole('admin', 'brewer'), async (req, res) => {

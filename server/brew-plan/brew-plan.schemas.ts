@@ -39,6 +39,7 @@ export const acceptSlotSchema = z.strictObject({
   brewDate: calendarDate,
   fermentationDays: days(BREW_PLAN_LIMITS.fermentationDays),
   conditioningDays: days(BREW_PLAN_LIMITS.conditioningDays),
+  brewerId: id.optional(),
 });
 
 export const movePlannedBatchSchema = z.strictObject({ brewDate: calendarDate, kitItemId: id.optional() });

@@ -7,7 +7,8 @@ import { BREW_PLAN_LIMITS, leftOutFermenters, BrewPlanTimeline, ProposalRequest,
 import { fermentationChart } from '../fermentation/fermentation.routes';
 import { RecipesService } from '../recipes';
 import { CalendarBatch, loadPlanCalendar } from './plan-calendar';
-import { occupancies, planningBusy, timelineBusy } from './plan-busy';
+import { expectedReleases, occupancies, planningBusy, timelineBusy } from './plan-busy';
+import { planBrewers } from './plan-brewer';
 import { assertScheduleFits, scheduleFor } from './plan-schedule';
 import { timelineLanes } from './timeline-lanes';
 
@@ -37,6 +38,9 @@ export function createBrewPlanReads(db: Knex, coopTimeZone: string, recipes: Rec
       return { from: start.toISODate()!, to: end.minus({ days: 1 }).toISODate()!, timeZone: coopTimeZone, lanes, room };
     },
 
+    /** Whom an admin may plan a batch for. */
+    brewers: () => planBrewers(db),
+
     async proposals(user: SessionUser, request: ProposalRequest): Promise<SlotProposals> {
       const version = await recipes.version(user, request.recipeId, request.recipeVersion);
       const { schedule, basis } = scheduleFor(version, request);
@@ -46,7 +50,9 @@ export function createBrewPlanReads(db: Knex, coopTimeZone: string, recipes: Rec
       const nowMs = now().getTime();
       const windowEnd = monday.plus({ days: searchDays + scheduleTotalDays(schedule) + 8 }).toJSDate();
       const calendar = await loadPlanCalendar(db, new Date(Math.min(nowMs, monday.toMillis())), windowEnd);
-      const busy = planningBusy(calendar, occupancies(calendar.batches, new Map(), coopTimeZone, nowMs));
+      const forecasts = await forecastFinishes(db, calendar.batches);
+      const releases = expectedReleases(calendar, forecasts, coopTimeZone, nowMs);
+      const busy = planningBusy(calendar, occupancies(calendar.batches, forecasts, coopTimeZone, nowMs), releases);
       const slots = proposeSlots({
         fermenters: calendar.fermenters, busy, volumeLitres: request.volumeLitres, schedule, wantedWeek: request.wantedWeek, zone: coopTimeZone,
         notBefore: nowMs, notAfter: nowMs + BOOKING_LIMITS.maxDaysAhead * DAY_MS, searchDays, limit: calendar.fermenters.length,
@@ -58,8 +64,8 @@ export function createBrewPlanReads(db: Knex, coopTimeZone: string, recipes: Rec
       }));
       const holds = calendar.batches
         .filter((b) => FERMENTER_HOLDING_STATUSES.includes(b.status))
-        .map((b) => ({ kitItemId: b.fermenterId, batchId: b.id, batchName: b.name }));
-      const leftOut = leftOutFermenters(calendar.fermenters, slots, holds, request.volumeLitres);
+        .map((b) => ({ kitItemId: b.fermenterId, batchId: b.id, batchName: b.name, until: releases.get(b.id) ?? null }));
+      const leftOut = leftOutFermenters(calendar.fermenters, slots, holds, request.volumeLitres, coopTimeZone);
       return { recipeName: version.design.name, schedule, basis, weekStart: monday.toISODate()!, proposals, leftOut };
     },
   };

@@ -3,7 +3,7 @@ import { ACTIVE_STATUSES, BatchStatus } from '@shared/batches';
 import { Booking } from '@shared/bookings';
 import { BrewSchedule, DEFAULT_SCHEDULES, PlanFermenter } from '@shared/brew-plan';
 import { dateOnly } from '../batches/batch-mapping';
-import { batchesRepository } from '../batches/batches.repository';
+import { BatchRecord, batchesRepository } from '../batches/batches.repository';
 import { bookingsRepository } from '../bookings/bookings.repository';
 import { kitRepository } from '../kit/kit.repository';
 import { brewPlanRepository, LinkedBooking } from './brew-plan.repository';
@@ -40,10 +40,15 @@ export async function loadPlanCalendar(db: Knex, from: Date, to: Date): Promise<
   const fermenters = items
     .filter((i) => i.kind === 'fermenter' && i.state !== 'retired')
     .map((i): PlanFermenter => ({ id: i.id, code: i.code, name: i.name, capacityLitres: i.capacityLitres, inService: i.state === 'in_service', turnaroundHours: i.turnaroundHours }));
+  return { fermenters, bookings, batches: await calendarBatches(db, records) };
+}
+
+/** The batches among `records` that sit in (or are planned for) a fermenter, with their schedules and bookings. */
+export async function calendarBatches(db: Knex, records: readonly BatchRecord[]): Promise<CalendarBatch[]> {
   const inFermenters = records.filter((r) => r.fermenter_kit_item_id !== null);
   const ids = inFermenters.map((r) => r.id);
   const [schedules, linked] = await Promise.all([brewPlanRepository.schedulesOf(db, ids), brewPlanRepository.linkedBookings(db, ids)]);
-  const batches = inFermenters.map((r): CalendarBatch => ({
+  return inFermenters.map((r): CalendarBatch => ({
     id: r.id,
     name: r.name,
     status: r.status,
@@ -55,5 +60,4 @@ export async function loadPlanCalendar(db: Knex, from: Date, to: Date): Promise<
     schedule: schedules.get(r.id) ?? DEFAULT_SCHEDULES.ale,
     booking: linked.get(r.id) ?? null,
   }));
-  return { fermenters, bookings, batches };
 }

@@ -8,12 +8,14 @@ import { recordAudit } from '../audit/audit-log';
 import { batchNotFound } from '../batches/batch-access';
 import { dateOnly } from '../batches/batch-mapping';
 import { batchesRepository } from '../batches/batches.repository';
-import { assertItemFree, BookingNotices, BookingsService, bookingsRepository, bookingWritesRepository, lockBookableItem } from '../bookings';
+import { assertItemFree, BookingNotices, BookingsService, bookingsRepository, bookingWritesRepository, HolderRelease, lockBookableItem } from '../bookings';
 import { AppError } from '../errors/app-error';
 import { predictVersion } from '../recipes/version-prediction';
 import { RecipesService } from '../recipes';
 import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { brewPlanRepository } from './brew-plan.repository';
+import { holderRelease } from './holder-release';
+import { plannedBrewer } from './plan-brewer';
 import { assertScheduleFits } from './plan-schedule';
 
 export interface BrewPlanWritesDeps {
@@ -48,6 +50,9 @@ export function createBrewPlanWrites({ db, coopTimeZone, recipes, bookings, noti
     return placed;
   }
 
+  /** The plan books a held fermenter from its holder's expected release on, as it proposed it. */
+  const releaseOn = (trx: Knex.Transaction, item: KitItem): HolderRelease => (holderId) => holderRelease(trx, item, holderId, coopTimeZone, now().getTime());
+
   async function planned(id: number): Promise<PlannedBatch> {
     const booking = (await brewPlanRepository.linkedBookings(db, [id])).get(id)!;
     const found = (await bookingsRepository.findById(db, booking.id))!;
@@ -60,23 +65,24 @@ export function createBrewPlanWrites({ db, coopTimeZone, recipes, bookings, noti
       assertScheduleFits(schedule);
       const placed = placeInTime(request.brewDate, schedule);
       const version = await recipes.version(user, request.recipeId, request.recipeVersion);
-      await bookings.assertMayBook(user.id);
+      await bookings.assertMayBook(await plannedBrewer(db, user, request.brewerId));
       const batchId = await transactionWithRetry(db, async (trx) => {
+        const brewerId = await plannedBrewer(trx, user, request.brewerId);
         const item = await lockBookableItem(trx, request.kitItemId, 'use');
         assertFermenterHolds(item, request.volumeLitres);
         const id = await batchesRepository.insert(trx, {
-          name: request.name, brewer_user_id: user.id, created_by_user_id: user.id, recipe_id: request.recipeId, recipe_version: request.recipeVersion,
+          name: request.name, brewer_user_id: brewerId, created_by_user_id: user.id, recipe_id: request.recipeId, recipe_version: request.recipeVersion,
           predicted: predictVersion(version), brew_date: new Date(`${request.brewDate}T00:00:00Z`), planned_volume_litres: request.volumeLitres,
           fermenter_kit_item_id: item.id, notes: '',
         });
         const until = new Date(heldEnd(placed, item.turnaroundHours));
-        await assertItemFree(trx, item, new Date(placed.start), until, { batchId: id });
+        await assertItemFree(trx, item, new Date(placed.start), until, { batchId: id, holderRelease: releaseOn(trx, item) });
         await brewPlanRepository.saveSchedule(trx, id, schedule);
         const bookingId = await bookingWritesRepository.insert(trx, {
-          kitItemId: item.id, userId: user.id, createdByUserId: user.id, purpose: 'use', startsAt: new Date(placed.start), endsAt: new Date(placed.end),
+          kitItemId: item.id, userId: brewerId, createdByUserId: user.id, purpose: 'use', startsAt: new Date(placed.start), endsAt: new Date(placed.end),
           heldUntil: until, timeZone: coopTimeZone, note: `Brew plan: ${request.name}`, batchId: id,
         });
-        await recordAudit(trx, { actorUserId: user.id, action: 'batch-planned', subjectType: 'batch', subjectId: id, detail: { ...schedule, kitItemId: item.id, brewDate: request.brewDate, bookingId, recipeId: request.recipeId, recipeVersion: request.recipeVersion } });
+        await recordAudit(trx, { actorUserId: user.id, action: 'batch-planned', subjectType: 'batch', subjectId: id, detail: { ...schedule, brewerUserId: brewerId, kitItemId: item.id, brewDate: request.brewDate, bookingId, recipeId: request.recipeId, recipeVersion: request.recipeVersion } });
         await notices?.bookingMade(trx, bookingId);
         return id;
       });
@@ -97,7 +103,7 @@ export function createBrewPlanWrites({ db, coopTimeZone, recipes, bookings, noti
         const item = await lockBookableItem(trx, targetId, 'use');
         assertFermenterHolds(item, Number(batch.planned_volume_litres));
         const until = new Date(heldEnd(placed, item.turnaroundHours));
-        await assertItemFree(trx, item, new Date(placed.start), until, { exceptBookingId: booking?.id, batchId });
+        await assertItemFree(trx, item, new Date(placed.start), until, { exceptBookingId: booking?.id, batchId, holderRelease: releaseOn(trx, item) });
         const times = { kitItemId: item.id, startsAt: new Date(placed.start), endsAt: new Date(placed.end), heldUntil: until, timeZone: coopTimeZone };
         if (booking) await bookingWritesRepository.reassign(trx, booking.id, times);
         else await bookingWritesRepository.insert(trx, { ...times, userId: batch.brewer_user_id, createdByUserId: user.id, purpose: 'use', note: `Brew plan: ${batch.name}`, batchId });

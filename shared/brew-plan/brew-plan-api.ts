@@ -9,6 +9,7 @@ export const BREW_PLAN_PATH = '/api/brew-plan';
 /*
  * Routes (roles in brackets; "any" = any signed-in person):
  *   GET   /api/brew-plan/timeline?from=&weeks=      [any]             BrewPlanTimeline (from: yyyy-MM-dd, co-op zone)
+ *   GET   /api/brew-plan/brewers                    [admin]           BrewerChoice[] (active members with the brewer role)
  *   POST  /api/brew-plan/proposals                  [admin, brewer]   ProposalRequest → SlotProposals
  *   POST  /api/brew-plan/batches                    [admin, brewer]   AcceptSlotRequest → PlannedBatch (201); 409 booking-conflict
  *   PATCH /api/brew-plan/batches/:batchId           [admin, brewer]   MovePlannedBatchRequest → PlannedBatch; 409 booking-conflict
@@ -98,6 +99,8 @@ export interface SlotProposals {
 }
 
 export interface AcceptSlotRequest extends BrewSchedule {
+  /** Whose batch it is; admins only may name an active brewer other than themselves. Left out: the caller. */
+  brewerId?: number;
   name: string;
   recipeId: number;
   recipeVersion: number;

@@ -8,3 +8,4 @@ export * from './utilisation';
 export * from './brew-plan-api';
 export * from './batch-occupancy';
 export * from './left-out-fermenters';
+export * from './fermenter-release';

@@ -19,11 +19,11 @@ describe('leftOutFermenters', () => {
   });
 
   it('proposes only the free fermenter that fits and names every other one with its reason', () => {
-    const leftOut = leftOutFermenters(fermenters, slots, [{ kitItemId: 1, batchId: 9, batchName: 'Hedge pale' }], 20);
+    const leftOut = leftOutFermenters(fermenters, slots, [{ kitItemId: 1, batchId: 9, batchName: 'Hedge pale', until: null }], 20, 'Europe/Berlin');
 
     expect(slots.map((s) => s.fermenter.code)).toEqual(['F5']);
     expect(leftOut.map((l) => [l.kitItemCode, l.reason.kind, l.message])).toEqual([
-      ['F1', 'held', 'Held by batch "Hedge pale" until it is packaged.'],
+      ['F1', 'held', 'Held by batch "Hedge pale" until it is packaged (no gravity forecast to go by yet).'],
       ['F2', 'too-small', 'Too small: holds 15 L, the batch is 20 L.'],
       ['F3', 'out-of-service', 'Out of service (under maintenance).'],
       ['F4', 'too-small', 'No capacity recorded in the kit room.'],
@@ -31,7 +31,7 @@ describe('leftOutFermenters', () => {
   });
 
   it('says a fitting fermenter with no hold simply had no free slot in the search', () => {
-    const leftOut = leftOutFermenters([fermenter(1, 30)], [], [], 20);
+    const leftOut = leftOutFermenters([fermenter(1, 30)], [], [], 20, 'Europe/Berlin');
 
     expect(leftOut).toEqual([{ kitItemId: 1, kitItemCode: 'F1', kitItemName: 'Fermenter 1', reason: { kind: 'no-free-slot' }, message: 'No free slot for the whole schedule within the search.' }]);
   });

@@ -151,9 +151,39 @@ describe('Brew plan API', () => {
     expect(res.body.proposals.some((p: { kitItemId: number }) => p.kitItemId === item.id)).toBe(false);
     const held = await t.db('batches').where({ id: planned.batchId }).first();
     expect(res.body.leftOut.find((l: { kitItemId: number }) => l.kitItemId === item.id)).toMatchObject({
-      reason: { kind: 'held', batchId: planned.batchId, batchName: held!.name },
-      message: `Held by batch "${held!.name}" until it is packaged.`,
+      reason: { kind: 'held', batchId: planned.batchId, batchName: held!.name, until: null },
+      message: `Held by batch "${held!.name}" until it is packaged (no gravity forecast to go by yet).`,
     });
+  });
+
+  it('when the fermenting batch’s gravity log forecasts its finish, then its fermenter is proposed and booked for a week after that finish, conditioning and cleaning', async () => {
+    const { client } = await brewer();
+    const recipe = await createAleRecipe(t.db, client);
+    const item = await createSizedFermenter(t.db, 1994);
+    const planned = (await client.send('post', '/api/brew-plan/batches', acceptBody(recipe, item.id, mondayInWeeks(zone, 2), 1994))).body;
+    const day = 86_400_000;
+    const began = Date.now() - 8 * day;
+    await t.db('batches').where({ id: planned.batchId }).update({ status: 'fermenting', fermenting_at: new Date(began), brew_date: new Date(began - day) });
+    // A logistic fall of apparent extract, 12 → 2.4 °P over the past week (the model of fermentation-forecast.ts; figures invented for the test).
+    for (let d = 0; d <= 6; d += 0.5) {
+      const plato = 2.4 + 9.6 / (1 + Math.exp(1.6 * (d - 2.5)));
+      const res = await client.send('post', `/api/batches/${planned.batchId}/readings`, { measuredAt: new Date(began + (d + 0.5) * day).toISOString(), instrument: 'density-meter', rawValue: Number(plato.toFixed(2)), rawUnit: 'plato', sampleTemperatureC: null, calibrationTemperatureC: null });
+      expect(res.status).toBe(201);
+    }
+    const forecast = (await client.get(`/api/batches/${planned.batchId}/fermentation`)).body.forecast;
+    expect(forecast.status).toBe('forecast');
+    // Free again after the later of the forecast finish plus 7 conditioning days and now, a packaging day and 24 h of cleaning.
+    const release = Math.max(forecast.finishTime + 7 * day, Date.now()) + day + 24 * 3_600_000;
+    const week = DateTime.fromMillis(release, { zone }).plus({ weeks: 1 }).startOf('week').toISODate()!;
+
+    const res = await proposalsFor(client, recipe, 1994, week);
+    const accepted = await client.send('post', '/api/brew-plan/batches', acceptBody(recipe, item.id, week, 1994));
+    const tooEarly = await client.send('post', '/api/brew-plan/batches', acceptBody(recipe, item.id, DateTime.fromMillis(release - day, { zone }).toISODate()!, 1994));
+
+    expect(res.body.proposals.find((p: { kitItemId: number }) => p.kitItemId === item.id)).toMatchObject({ brewDate: week });
+    expect(accepted.status).toBe(201);
+    expect(tooEarly.status).toBe(409);
+    expect(tooEarly.body.error.message).toContain(`batch #${planned.batchId}`);
   });
 
   it('when the input is bad, then 400 names the field and stores nothing', async () => {
