@@ -32,13 +32,18 @@ describe('Brew plan in the browser', () => {
 
     await brewPlanPage.open(page);
     await brewPlanPage.askForSlots(page, { name: batchName, recipe: recipeName, volumeLitres: 1900, wantedWeek: nextMonday });
-    const accept = brewPlanPage.proposals(page).getByRole('button', { name: `Accept ${fermenter.code} from ${nextMonday}` });
+    const day = (date: string) => DateTime.fromISO(date).toFormat('d LLL yyyy', { locale: 'en-GB' });
+    const accept = brewPlanPage.proposals(page).getByRole('button', { name: `Accept ${fermenter.code} from ${day(nextMonday)}` });
     await accept.click();
     await page.getByText(`Planned on ${fermenter.code}`).waitFor();
 
     const lane = brewPlanPage.lane(page, fermenter.code);
     await lane.getByRole('article', { name: `${batchName}, Planned` }).waitFor();
-    expect(await lane.textContent()).toContain(`Mon ${DateTime.fromISO(nextMonday).toFormat('d LLL', { locale: 'en-GB' })} 08:00`);
+    // A batch's timeline dates are days, without hours, in the style of every other date.
+    const entry = lane.getByRole('article', { name: `${batchName}, Planned` });
+    const when = (await entry.locator('.when').textContent())!;
+    expect(when).toMatch(new RegExp(`^${day(nextMonday)} – \\d{1,2} \\w{3} \\d{4}`));
+    expect(when).not.toMatch(/\d\d:\d\d/);
     await dismissSnackBar(page);
     expect(await seriousA11yViolations(page)).toEqual([]);
 
@@ -76,8 +81,9 @@ describe('Brew plan in the browser', () => {
     expect(await refusal.textContent()).toContain(`blocked for maintenance (booking #${block.body.id})`);
 
     await brewPlanPage.moveBatch(page, batchName, week(6).toISODate()!);
-    await page.getByText(`Planned on ${fermenter.code}: booked from ${week(6).toISODate()} 08:00`).waitFor();
-    await brewPlanPage.lane(page, fermenter.code).getByText(`Mon ${week(6).toFormat('d LLL', { locale: 'en-GB' })} 08:00`).waitFor();
+    const newDay = week(6).toFormat('d LLL yyyy', { locale: 'en-GB' });
+    await page.getByText(`Planned on ${fermenter.code}: brew day ${newDay}`).waitFor();
+    await brewPlanPage.lane(page, fermenter.code).getByText(new RegExp(`^${newDay} – `)).waitFor();
     expect(await brewPlanPage.lane(page, fermenter.code).getByRole('alert').count()).toBe(0);
     await context.close();
   }, 120_000);

@@ -1,6 +1,7 @@
 import { HttpClient, HttpParams } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { AcceptSlotRequest, BREW_PLAN_PATH, BrewPlanTimeline, MovePlannedBatchRequest, PlannedBatch, ProposalRequest, SlotProposals } from '@shared/brew-plan';
+import { BrewerChoice } from '@shared/batches';
 import { RECIPES_PATH, RecipeSummary } from '@shared/recipes';
 import { Observable } from 'rxjs';
 
@@ -23,6 +24,11 @@ export class BrewPlanClient {
 
   move(batchId: number, request: MovePlannedBatchRequest): Observable<PlannedBatch> {
     return this.http.patch<PlannedBatch>(`${BREW_PLAN_PATH}/batches/${batchId}`, request);
+  }
+
+  /** Active brewers an admin may plan a batch for. */
+  brewers(): Observable<BrewerChoice[]> {
+    return this.http.get<BrewerChoice[]>(`${BREW_PLAN_PATH}/brewers`);
   }
 
   recipes(): Observable<RecipeSummary[]> {

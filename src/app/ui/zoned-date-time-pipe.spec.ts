@@ -1,4 +1,4 @@
-import { ZonedDateTimePipe } from './zoned-date-time-pipe';
+import { formatCalendarDay, ZonedDateTimePipe } from './zoned-date-time-pipe';
 
 describe('ZonedDateTimePipe', () => {
   const pipe = new ZonedDateTimePipe();
@@ -22,5 +22,11 @@ describe('ZonedDateTimePipe', () => {
 
   it('shows a dash for a missing instant', () => {
     expect(pipe.transform(null, 'UTC')).toBe('—');
+  });
+});
+
+describe('formatCalendarDay', () => {
+  it('words a co-op calendar day as the pipe’s date form does', () => {
+    expect(formatCalendarDay('2027-04-03')).toBe('3 Apr 2027');
   });
 });

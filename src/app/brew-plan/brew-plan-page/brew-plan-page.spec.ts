@@ -84,10 +84,17 @@ describe('BrewPlanPage', () => {
     };
     const element = await render(['member', 'brewer'], { proposals });
     const page = fixture.componentInstance as unknown as { requestProposals(p: unknown): void };
-    page.requestProposals({ name: 'Second pale', request: { recipeId: 4, recipeVersion: 2, volumeLitres: 40, wantedWeek: '2027-01-11' } });
+    page.requestProposals({ name: 'Second pale', brewerId: null, request: { recipeId: 4, recipeVersion: 2, volumeLitres: 40, wantedWeek: '2027-01-11' } });
 
     const accept = [...element.querySelectorAll('button')].find((b) => b.textContent?.includes('Accept F5'))!;
+    const proposal = element.querySelector('[aria-label="Proposed slots"]')!.textContent!;
     accept.click();
+
+    // A batch is planned in whole days: its dates are shown as days, in one style.
+    expect(accept.textContent!.trim()).toBe('Accept F5 from 11 Jan 2027');
+    expect(proposal).toContain('Brew 11 Jan 2027 · packaged by 26 Jan 2027');
+    expect(proposal).toContain('Cleaning until 27 Jan 2027');
+    expect(proposal).not.toMatch(/\d\d:\d\d/);
 
     expect(store.dispatch).toHaveBeenCalledWith(BrewPlanPageActions.slotAccepted({
       request: { name: 'Second pale', recipeId: 4, recipeVersion: 2, volumeLitres: 40, kitItemId: 2, brewDate: '2027-01-11', fermentationDays: 10, conditioningDays: 4 },
@@ -95,11 +102,34 @@ describe('BrewPlanPage', () => {
     expect(element.querySelector('cw-move-batch-form')).not.toBeNull();
   });
 
+  it('lets an admin, and only an admin, choose whose batch it is from the active brewers, and sends that brewer with the accepted slot', async () => {
+    const brewers = [{ id: 21, name: 'Tova Brewer' }];
+    const proposals: SlotProposals = {
+      recipeName: 'Hedge pale', schedule: { fermentationDays: 10, conditioningDays: 4 }, basis: 'brewer', weekStart: '2027-01-11',
+      proposals: [{ kitItemId: 2, kitItemCode: 'F5', kitItemName: 'Big one', capacityLitres: 60, brewDate: '2027-01-11', startLocal: '2027-01-11T08:00', endLocal: '2027-01-26T18:00', heldUntil: '2027-01-27T17:00:00.000Z', phases: [] }],
+      leftOut: [],
+    };
+    const brewerField = (element: HTMLElement) => [...element.querySelectorAll('cw-plan-batch-form mat-label')].find((l) => l.textContent?.trim() === 'Brewer');
+    expect(brewerField(await render(['member', 'brewer'], { brewers }))).toBeUndefined();
+    TestBed.resetTestingModule();
+    const element = await render(['member', 'admin'], { brewers, proposals });
+    expect(brewerField(element)).toBeDefined();
+    expect(store.dispatch).toHaveBeenCalledWith(expect.objectContaining({ type: BrewPlanPageActions.opened.type, mayChooseBrewer: true }));
+
+    const page = fixture.componentInstance as unknown as { requestProposals(p: unknown): void };
+    page.requestProposals({ name: 'For Tova', brewerId: 21, request: { recipeId: 4, recipeVersion: 2, volumeLitres: 40, wantedWeek: '2027-01-11' } });
+    [...element.querySelectorAll('button')].find((b) => b.textContent?.includes('Accept F5'))!.click();
+
+    expect(store.dispatch).toHaveBeenCalledWith(BrewPlanPageActions.slotAccepted({
+      request: { name: 'For Tova', brewerId: 21, recipeId: 4, recipeVersion: 2, volumeLitres: 40, kitItemId: 2, brewDate: '2027-01-11', fermentationDays: 10, conditioningDays: 4 },
+    }));
+  });
+
   it('names each fermenter left out and why, and drops the proposals once the plan form is edited', async () => {
     const proposals: SlotProposals = {
       recipeName: 'Hedge pale', schedule: { fermentationDays: 14, conditioningDays: 7 }, basis: 'ale-yeast', weekStart: '2027-01-11', proposals: [],
       leftOut: [
-        { kitItemId: 1, kitItemCode: 'F1', kitItemName: 'Conical 1', reason: { kind: 'held', batchId: 9, batchName: 'Hedge pale' }, message: 'Held by batch "Hedge pale" until it is packaged.' },
+        { kitItemId: 1, kitItemCode: 'F1', kitItemName: 'Conical 1', reason: { kind: 'held', batchId: 9, batchName: 'Hedge pale', until: null }, message: 'Held by batch "Hedge pale" until it is packaged.' },
         { kitItemId: 3, kitItemCode: 'F3', kitItemName: 'Small one', reason: { kind: 'too-small', capacityLitres: 15 }, message: 'Too small: holds 15 L, the batch is 20 L.' },
       ],
     };

@@ -33,6 +33,7 @@ export class BrewPlanPage implements OnInit {
   protected readonly loading = this.store.selectSignal(brewPlanFeature.selectLoading);
   protected readonly loadError = this.store.selectSignal(brewPlanFeature.selectLoadError);
   protected readonly recipes = this.store.selectSignal(brewPlanFeature.selectRecipes);
+  protected readonly brewers = this.store.selectSignal(brewPlanFeature.selectBrewers);
   protected readonly proposals = this.store.selectSignal(brewPlanFeature.selectProposals);
   protected readonly proposing = this.store.selectSignal(brewPlanFeature.selectProposing);
   protected readonly accepting = this.store.selectSignal(brewPlanFeature.selectAccepting);
@@ -49,7 +50,7 @@ export class BrewPlanPage implements OnInit {
   private readonly asked = signal<PlanRequest | null>(null);
 
   ngOnInit(): void {
-    this.store.dispatch(BrewPlanPageActions.opened({ from: this.today().startOf('week').toISODate()!, mayPlan: this.mayPlan() }));
+    this.store.dispatch(BrewPlanPageActions.opened({ from: this.today().startOf('week').toISODate()!, mayPlan: this.mayPlan(), mayChooseBrewer: this.isAdmin() }));
   }
 
   protected step(weeks: number): void {
@@ -80,8 +81,9 @@ export class BrewPlanPage implements OnInit {
     const proposals = this.proposals();
     if (!asked || !proposals) return;
     const { recipeId, recipeVersion, volumeLitres } = asked.request;
+    const forBrewer = asked.brewerId === null ? {} : { brewerId: asked.brewerId };
     this.store.dispatch(
-      BrewPlanPageActions.slotAccepted({ request: { name: asked.name, recipeId, recipeVersion, volumeLitres, kitItemId: slot.kitItemId, brewDate: slot.brewDate, ...proposals.schedule } }),
+      BrewPlanPageActions.slotAccepted({ request: { name: asked.name, ...forBrewer, recipeId, recipeVersion, volumeLitres, kitItemId: slot.kitItemId, brewDate: slot.brewDate, ...proposals.schedule } }),
     );
   }
 

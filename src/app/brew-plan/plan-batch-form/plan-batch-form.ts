@@ -7,16 +7,18 @@ import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/m
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { DateTime } from 'luxon';
-import { BATCH_LIMITS } from '@shared/batches';
+import { BATCH_LIMITS, BrewerChoice } from '@shared/batches';
 import { BREW_PLAN_LIMITS, ProposalRequest } from '@shared/brew-plan';
 import { RecipeSummary } from '@shared/recipes';
 import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
 import { onCountChange } from '@app/ui/on-count-change';
 import { readyToSubmit } from '@app/ui/ready-to-submit';
 
-/** What the brewer asks the planner for, with the name the batch will carry. */
+/** What the brewer asks the planner for, with the name the batch will carry and (admins) whose batch it is. */
 export interface PlanRequest {
   name: string;
+  /** Null: the person planning. */
+  brewerId: number | null;
   request: ProposalRequest;
 }
 
@@ -31,6 +33,8 @@ const optionalDays = (range: { min: number; max: number }) => [Validators.min(ra
 })
 export class PlanBatchForm {
   readonly recipes = input.required<RecipeSummary[]>();
+  /** Admins choose whose batch it is from these active brewers; null hides the choice (a brewer plans for themself). */
+  readonly brewers = input<readonly BrewerChoice[] | null>(null);
   /** Today in the co-op's zone; earlier weeks cannot be picked. */
   readonly today = input.required<DateTime>();
   readonly pending = input(false);
@@ -45,6 +49,7 @@ export class PlanBatchForm {
   private readonly fb = inject(NonNullableFormBuilder);
   protected readonly form = this.fb.group({
     name: ['', [Validators.required, Validators.maxLength(BATCH_LIMITS.nameMaxLength)]],
+    brewerId: this.fb.control<number | null>(null),
     recipeId: this.fb.control<number | null>(null, Validators.required),
     recipeVersion: this.fb.control<number | null>(null, Validators.required),
     volumeLitres: this.fb.control<number | null>(20, [Validators.required, Validators.min(BATCH_LIMITS.volumeLitres.min), Validators.max(BATCH_LIMITS.volumeLitres.max)]),
@@ -74,6 +79,6 @@ export class PlanBatchForm {
     const request: ProposalRequest = { recipeId: v.recipeId!, recipeVersion: v.recipeVersion!, volumeLitres: v.volumeLitres!, wantedWeek: v.wantedWeek!.toISODate()! };
     if (v.fermentationDays !== null) request.fermentationDays = v.fermentationDays;
     if (v.conditioningDays !== null) request.conditioningDays = v.conditioningDays;
-    this.proposalsRequested.emit({ name: v.name.trim(), request });
+    this.proposalsRequested.emit({ name: v.name.trim(), brewerId: this.brewers() === null ? null : v.brewerId, request });
   }
 }

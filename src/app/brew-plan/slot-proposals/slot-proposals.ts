@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { SCHEDULE_BASIS_LABELS, SlotProposal, SlotProposals as Proposals } from '@shared/brew-plan';
-import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
+import { formatCalendarDay, ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
 
 /** The planner's proposals, earliest first; the brewer accepts one. */
 @Component({
@@ -11,7 +11,7 @@ import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
     @let p = proposals();
     <p class="schedule">
       {{ p.recipeName }}: {{ p.schedule.fermentationDays }} days fermentation, {{ p.schedule.conditioningDays }} days conditioning,
-      {{ basisLabels[p.basis] }}. Searched from the week of {{ p.weekStart }}.
+      {{ basisLabels[p.basis] }}. Searched from the week of {{ day(p.weekStart) }}.
     </p>
     @if (p.proposals.length) {
       <ul class="proposals" aria-label="Proposed slots">
@@ -19,10 +19,10 @@ import { ZonedDateTimePipe } from '@app/ui/zoned-date-time-pipe';
           <li>
             <div>
               <strong>{{ slot.kitItemCode }}</strong> · {{ slot.kitItemName }} · {{ slot.capacityLitres }} L
-              <div class="when">Brew {{ slot.startLocal.replace('T', ' ') }} · packaged by {{ slot.endLocal.replace('T', ' ') }}</div>
-              <div class="held">Cleaning until {{ slot.heldUntil | cwZonedDateTime: timeZone() }}</div>
+              <div class="when">Brew {{ day(slot.brewDate) }} · packaged by {{ day(slot.endLocal.slice(0, 10)) }}</div>
+              <div class="held">Cleaning until {{ slot.heldUntil | cwZonedDateTime: timeZone() : 'date' }}</div>
             </div>
-            <button mat-flat-button type="button" [disabled]="pending()" (click)="slotAccepted.emit(slot)">Accept {{ slot.kitItemCode }} from {{ slot.brewDate }}</button>
+            <button mat-flat-button type="button" [disabled]="pending()" (click)="slotAccepted.emit(slot)">Accept {{ slot.kitItemCode }} from {{ day(slot.brewDate) }}</button>
           </li>
         }
       </ul>
@@ -55,4 +55,5 @@ export class SlotProposals {
   readonly slotAccepted = output<SlotProposal>();
 
   protected readonly basisLabels = SCHEDULE_BASIS_LABELS;
+  protected readonly day = formatCalendarDay;
 }

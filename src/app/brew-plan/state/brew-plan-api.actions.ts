@@ -1,4 +1,5 @@
 import { createActionGroup, props } from '@ngrx/store';
+import { BrewerChoice } from '@shared/batches';
 import { BrewPlanTimeline, PlannedBatch, SlotProposals } from '@shared/brew-plan';
 import { RecipeSummary } from '@shared/recipes';
 import { FieldErrors } from '@app/ui/server-field-errors';
@@ -10,6 +11,8 @@ export const BrewPlanApiActions = createActionGroup({
     'Timeline Loaded Failure': props<{ message: string }>(),
     'Recipes Loaded Success': props<{ recipes: RecipeSummary[] }>(),
     'Recipes Loaded Failure': props<{ message: string }>(),
+    'Brewers Loaded Success': props<{ brewers: BrewerChoice[] }>(),
+    'Brewers Loaded Failure': props<{ message: string }>(),
     'Proposals Loaded Success': props<{ proposals: SlotProposals }>(),
     'Proposals Loaded Failure': props<{ message: string; fields: FieldErrors | null }>(),
     'Slot Accepted Success': props<{ planned: PlannedBatch }>(),

@@ -4,7 +4,8 @@ import { AcceptSlotRequest, MovePlannedBatchRequest, ProposalRequest } from '@sh
 export const BrewPlanPageActions = createActionGroup({
   source: 'Brew Plan Page',
   events: {
-    Opened: props<{ from: string; mayPlan: boolean }>(),
+    /** `mayChooseBrewer`: an admin, who may plan a batch for another brewer. */
+    Opened: props<{ from: string; mayPlan: boolean; mayChooseBrewer: boolean }>(),
     'Period Changed': props<{ from: string }>(),
     'Proposals Requested': props<{ request: ProposalRequest }>(),
     /** Any edit to the plan form: proposals made for the old values no longer apply. */

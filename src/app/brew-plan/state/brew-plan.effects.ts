@@ -41,6 +41,21 @@ export const loadRecipes = createEffect(
   { functional: true },
 );
 
+export const loadBrewers = createEffect(
+  (actions$ = inject(Actions), client = inject(BrewPlanClient)) =>
+    actions$.pipe(
+      ofType(BrewPlanPageActions.opened),
+      filter(({ mayChooseBrewer }) => mayChooseBrewer),
+      switchMap(() =>
+        client.brewers().pipe(
+          map((brewers) => BrewPlanApiActions.brewersLoadedSuccess({ brewers })),
+          catchError((error: unknown) => of(BrewPlanApiActions.brewersLoadedFailure({ message: apiErrorMessage(error, 'The brewers could not be loaded.') }))),
+        ),
+      ),
+    ),
+  { functional: true },
+);
+
 export const requestProposals = createEffect(
   (actions$ = inject(Actions), client = inject(BrewPlanClient)) =>
     actions$.pipe(

@@ -1,4 +1,5 @@
 import { createFeature, createReducer, on } from '@ngrx/store';
+import { BrewerChoice } from '@shared/batches';
 import { BrewPlanTimeline, SlotProposals } from '@shared/brew-plan';
 import { RecipeSummary } from '@shared/recipes';
 import { AuthApiActions } from '@app/auth/state/auth-api.actions';
@@ -13,6 +14,8 @@ export interface BrewPlanState {
   loading: boolean;
   loadError: string | null;
   recipes: RecipeSummary[];
+  /** Whom an admin may plan for; empty for everyone else. */
+  brewers: BrewerChoice[];
   proposals: SlotProposals | null;
   proposing: boolean;
   accepting: boolean;
@@ -31,6 +34,7 @@ export const initialBrewPlanState: BrewPlanState = {
   loading: false,
   loadError: null,
   recipes: [],
+  brewers: [],
   proposals: null,
   proposing: false,
   accepting: false,
@@ -49,6 +53,7 @@ export const brewPlanFeature = createFeature({
     on(BrewPlanApiActions.timelineLoadedSuccess, (state, { timeline }): BrewPlanState => ({ ...state, timeline, loading: false })),
     on(BrewPlanApiActions.timelineLoadedFailure, (state, { message }): BrewPlanState => ({ ...state, loading: false, loadError: message })),
     on(BrewPlanApiActions.recipesLoadedSuccess, (state, { recipes }): BrewPlanState => ({ ...state, recipes })),
+    on(BrewPlanApiActions.brewersLoadedSuccess, (state, { brewers }): BrewPlanState => ({ ...state, brewers })),
     on(BrewPlanPageActions.proposalsRequested, (state): BrewPlanState => ({ ...state, proposing: true, proposals: null, planError: null, planFieldErrors: null })),
     on(BrewPlanPageActions.planFormChanged, (state): BrewPlanState => (state.proposals || state.planError ? { ...state, proposals: null, planError: null } : state)),
     on(BrewPlanApiActions.proposalsLoadedSuccess, (state, { proposals }): BrewPlanState => ({ ...state, proposing: false, proposals })),

@@ -16,19 +16,20 @@ const timeline: BrewPlanTimeline = {
 };
 
 describe('buildTimelineView', () => {
-  it('places the phases as shares of the eight weeks and words the times in the co-op zone', () => {
+  it('places the phases as shares of the eight weeks and words a batch’s days (no hours) in the co-op zone', () => {
     const view = buildTimelineView(timeline)!;
     const entry = view.lanes[0].entries[0];
 
     expect(view.period).toBe('4 Jan 2027 – 28 Feb 2027');
     expect(view.roomInUsePercent).toBe(42);
-    expect(entry.when).toBe('Mon 4 Jan 08:00 – Tue 26 Jan 18:00');
+    expect(entry.when).toBe('4 Jan 2027 – 26 Jan 2027');
+    expect(entry.heldUntil).toBe('27 Jan 2027');
     expect(entry.tag).toBe('Fermenting');
     // The window starts at Berlin midnight; the brew day starts 8 h into 56 days.
     expect(entry.segments[0].kind).toBe('brew');
     expect(entry.segments[0].left).toBeCloseTo((8 / (56 * 24)) * 100, 6);
     expect(entry.segments.map((s) => s.kind)).toEqual(['brew', 'fermentation', 'turnaround']);
-    expect(entry.forecast).toBe('Forecast: fermentation finishes Tue 12 Jan');
+    expect(entry.forecast).toBe('Forecast: fermentation finishes 12 Jan 2027');
     expect(entry.freesEarly).toBe('Frees up 5 days early, by the gravity forecast');
     expect(entry.movable).toBe(false);
     expect(view.lanes[0].freesEarly).toBe(true);
@@ -40,5 +41,15 @@ describe('buildTimelineView', () => {
     const entry = buildTimelineView(planned)!.lanes[0].entries[0];
 
     expect(entry).toMatchObject({ movable: true, brewDate: '2027-01-04', forecast: null, freesEarly: null });
+  });
+
+  it('keeps the hours of a booking, where the time of day matters', () => {
+    const booking: TimelineEntry = { ...batch, kind: 'booking', label: 'Booking by Ada', batchId: null, batchStatus: null, phases: [], forecastFinish: null, freesEarlyByDays: null, heldUntil: null };
+    const withBooking = { ...timeline, lanes: [{ ...timeline.lanes[0], entries: [booking] }] };
+
+    const entry = buildTimelineView(withBooking)!.lanes[0].entries[0];
+
+    // Europe/Berlin is UTC+1 (CET) in January (IANA tz database).
+    expect(entry.when).toBe('4 Jan 2027, 08:00 CET – 26 Jan 2027, 18:00 CET');
   });
 });

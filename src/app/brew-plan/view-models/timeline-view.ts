@@ -1,6 +1,7 @@
 import { DateTime } from 'luxon';
 import { BATCH_STATUS_LABELS } from '@shared/batches';
 import { BrewPlanTimeline, PLAN_PHASE_LABELS, TimelineEntry, TimelineLane } from '@shared/brew-plan';
+import { formatCalendarDay, formatZoned, ZonedForm } from '@app/ui/zoned-date-time-pipe';
 
 /** A stretch of an entry's bar, as a share of the window (percent). */
 export interface BarSegment {
@@ -51,14 +52,8 @@ export interface TimelineView {
 
 const percent = (share: number) => Math.round(share * 100);
 
-function formatter(zone: string) {
-  const at = (iso: string) => DateTime.fromISO(iso, { zone: 'utc' }).setZone(zone);
-  return {
-    dayTime: (iso: string) => at(iso).toFormat('ccc d LLL HH:mm', { locale: 'en-GB' }),
-    day: (iso: string) => at(iso).toFormat('ccc d LLL', { locale: 'en-GB' }),
-    date: (iso: string) => at(iso).toISODate()!,
-  };
-}
+/** Batches are planned in whole days; a booking or maintenance block keeps its hours. */
+const precisionOf = (entry: TimelineEntry): ZonedForm => (entry.kind === 'batch' ? 'date' : 'dateTime');
 
 function segment(kind: string, label: string, start: string, end: string, from: number, to: number): BarSegment | null {
   const s = Math.max(Date.parse(start), from);
@@ -68,7 +63,7 @@ function segment(kind: string, label: string, start: string, end: string, from: 
 }
 
 function entryView(entry: TimelineEntry, zone: string, from: number, to: number): EntryView {
-  const f = formatter(zone);
+  const shown = (iso: string) => formatZoned(iso, zone, precisionOf(entry));
   const parts = entry.kind === 'batch' ? entry.phases.map((p) => segment(p.phase, PLAN_PHASE_LABELS[p.phase], p.start, p.end, from, to)) : [segment(entry.kind, entry.label, entry.start, entry.end, from, to)];
   const held = entry.heldUntil && entry.heldUntil !== entry.end ? entry.heldUntil : null;
   const cleaning = held ? segment('turnaround', 'Cleaning turnaround', entry.end, held, from, to) : null;
@@ -78,14 +73,14 @@ function entryView(entry: TimelineEntry, zone: string, from: number, to: number)
     kind: entry.kind,
     label: entry.label,
     tag,
-    when: `${f.dayTime(entry.start)} – ${f.dayTime(entry.end)}`,
-    heldUntil: held ? f.dayTime(held) : null,
+    when: `${shown(entry.start)} – ${shown(entry.end)}`,
+    heldUntil: held ? shown(held) : null,
     segments: [...parts, cleaning].filter((s): s is BarSegment => s !== null),
-    forecast: entry.forecastFinish ? `Forecast: fermentation finishes ${f.day(entry.forecastFinish)}` : null,
+    forecast: entry.forecastFinish ? `Forecast: fermentation finishes ${formatZoned(entry.forecastFinish, zone, 'date')}` : null,
     freesEarly: entry.freesEarlyByDays ? `Frees up ${entry.freesEarlyByDays} day${entry.freesEarlyByDays === 1 ? '' : 's'} early, by the gravity forecast` : null,
     batchId: entry.batchId,
     movable: entry.kind === 'batch' && entry.batchStatus === 'planned',
-    brewDate: entry.kind === 'batch' ? f.date(entry.start) : null,
+    brewDate: entry.kind === 'batch' ? DateTime.fromISO(entry.start, { zone: 'utc' }).setZone(zone).toISODate() : null,
   };
 }
 
@@ -109,11 +104,10 @@ export function buildTimelineView(timeline: BrewPlanTimeline | null): TimelineVi
   const zone = timeline.timeZone;
   const from = DateTime.fromISO(timeline.from, { zone }).toMillis();
   const to = DateTime.fromISO(timeline.to, { zone }).plus({ days: 1 }).toMillis();
-  const day = (date: string) => DateTime.fromISO(date).toFormat('d LLL yyyy', { locale: 'en-GB' });
   return {
     from: timeline.from,
     to: timeline.to,
-    period: `${day(timeline.from)} – ${day(timeline.to)}`,
+    period: `${formatCalendarDay(timeline.from)} – ${formatCalendarDay(timeline.to)}`,
     roomInUsePercent: percent(timeline.room.inUse),
     roomMaintenancePercent: percent(timeline.room.maintenance),
     lanes: timeline.lanes.map((l) => laneView(l, zone, from, to)),
