@@ -20,4 +20,13 @@ describe('applyServerFieldErrors', () => {
 
     expect(form.controls.email.errors).toBeNull();
   });
+
+  it('puts a field the API names otherwise on the control it is mapped to', () => {
+    const form = new FormGroup({ startDate: new FormControl(null), note: new FormControl('') });
+
+    applyServerFieldErrors(form, { start: 'Must not be in the past.', note: 'Too long.' }, { start: 'startDate' });
+
+    expect(form.controls.startDate.getError('server')).toBe('Must not be in the past.');
+    expect(form.controls.note.getError('server')).toBe('Too long.');
+  });
 });

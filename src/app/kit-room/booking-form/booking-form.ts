@@ -8,7 +8,7 @@ import { MatOption, MatSelect } from '@angular/material/select';
 import { DateTime } from 'luxon';
 import { BOOKING_LIMITS, CreateBookingRequest } from '@shared/bookings';
 import { KitItemSummary } from '@shared/kit';
-import { FieldErrors } from '@app/ui/server-field-errors';
+import { applyServerFieldErrors, FieldErrors } from '@app/ui/server-field-errors';
 import { NamedChoice } from '../named-choice';
 import { WallClockFields } from '../wall-clock-fields/wall-clock-fields';
 import { endAfterStart, wallClockOf } from './booking-form-model';
@@ -58,15 +58,8 @@ export class BookingForm {
   );
 
   constructor() {
-    effect(() => {
-      const fields = this.fieldErrors() ?? {};
-      const targets: Record<string, string> = { start: 'startDate', end: 'endDate', kitItemId: 'kitItemId', note: 'note', batchId: 'batchId', userId: 'userId' };
-      for (const [name, reason] of Object.entries(fields)) {
-        const control = this.form.get(targets[name] ?? name);
-        control?.setErrors({ ...control.errors, server: reason });
-        control?.markAsTouched();
-      }
-    });
+    // The API names the instants; the form has a date picker and a time field for each.
+    effect(() => applyServerFieldErrors(this.form, this.fieldErrors(), { start: 'startDate', end: 'endDate' }));
     onCountChange(this.createdCount, () => {
       this.form.patchValue({ startDate: null, endDate: null, note: '', maintenance: false, batchId: null });
       this.form.markAsUntouched();

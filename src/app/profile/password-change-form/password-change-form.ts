@@ -33,7 +33,8 @@ export class PasswordChangeForm {
   });
 
   constructor() {
-    effect(() => applyServerFieldErrors(this.form, this.serverErrors()));
+    // The server names the new password `newPassword`; the form calls it `password`.
+    effect(() => applyServerFieldErrors(this.form, this.fieldErrors(), { newPassword: 'password' }));
     onCountChange(this.changedCount, () => this.form.reset());
   }
 
@@ -43,13 +44,5 @@ export class PasswordChangeForm {
     if (!readyToSubmit(this.form)) return;
     const { currentPassword, password } = this.form.getRawValue();
     this.submitted.emit({ currentPassword, newPassword: password });
-  }
-
-  /** The server names the new password `newPassword`; the form calls it `password`. */
-  private serverErrors(): FieldErrors | null {
-    const fields = this.fieldErrors();
-    if (!fields) return null;
-    const { newPassword, ...rest } = fields;
-    return newPassword ? { ...rest, password: newPassword } : rest;
   }
 }
