@@ -16,6 +16,15 @@ interface LoadRecord {
   badBodies: string[];
 }
 
+/** Waits until `done()` holds, checking every 50 ms; fails naming what it waited for. */
+async function until(done: () => boolean, timeoutMs: number, what: string): Promise<void> {
+  const start = Date.now();
+  while (!done()) {
+    if (Date.now() - start > timeoutMs) throw new Error(`Waited ${timeoutMs} ms for ${what}`);
+    await pause(50);
+  }
+}
+
 /** Signed-in members reading the recipe list and creating recipes until `running()` turns false. */
 async function runLoad(clients: ApiClient[], design: object, running: () => boolean, record: LoadRecord): Promise<void> {
   await Promise.all(
@@ -56,7 +65,8 @@ describe('Database outage', () => {
     let running = true;
     const load = runLoad(clients, sampleDesign(ids), () => running, record);
 
-    await pause(800);
+    // Counted, not timed: a loaded machine may confirm few writes in a fixed pause.
+    await until(() => record.confirmedIds.length >= 3, 20_000, 'three confirmed writes before the outage');
     await database.kill();
     await pause(500);
     const during = {
@@ -77,7 +87,8 @@ describe('Database outage', () => {
       }
       await pause(100);
     }
-    await pause(500);
+    const confirmedBeforeRecovery = record.confirmedIds.length;
+    await until(() => record.confirmedIds.length >= confirmedBeforeRecovery + 2, 15_000, 'two confirmed writes after the restart');
     running = false;
     await load;
 
@@ -97,5 +108,5 @@ describe('Database outage', () => {
     const stored = await database.knex('recipes').whereIn('id', record.confirmedIds).pluck('id');
     expect(stored.sort()).toEqual([...record.confirmedIds].sort());
     expect(server.output()).not.toMatch(/unhandled promise rejection|uncaught/);
-  });
+  }, 90_000);
 });
