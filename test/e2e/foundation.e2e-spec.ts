@@ -72,4 +72,34 @@ describe('Foundation in the browser', () => {
     await page.getByRole('link', { name: 'Today' }).waitFor();
     await context.close();
   });
+
+  it('when a member opens their profile from the account menu, then the new name shows at once and the password changes only with the current one', async () => {
+    const member = await createUser(env.server.db, ['member'], { name: 'Profile Before' });
+    const { context, page } = await newPage(env.browser, env.server.baseUrl);
+    await signInPage.signIn(page, member.email, member.password);
+    await page.waitForURL(/\/today/);
+    await page.getByRole('button', { name: 'Account menu' }).click();
+    await page.getByRole('menuitem', { name: 'Your profile' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Your profile' }).waitFor();
+
+    await page.getByLabel('Your name').fill('Profile After');
+    await page.getByRole('button', { name: 'Save your details' }).click();
+    await page.getByText('Your profile is saved.').waitFor();
+    await page.locator('cw-user-menu').getByText('Profile After').waitFor();
+
+    await page.getByLabel('Current password').fill('not the password');
+    await page.getByLabel('New password', { exact: true }).fill('a new long password');
+    await page.getByLabel('Confirm password').fill('a new long password');
+    await page.getByRole('button', { name: 'Change the password' }).click();
+    await page.getByText(/^The current password /).waitFor();
+    await page.getByLabel('Current password').fill(member.password);
+    await page.getByRole('button', { name: 'Change the password' }).click();
+    await page.getByText('Password changed; your other sessions are signed out.').waitFor();
+    expect(await seriousA11yViolations(page)).toEqual([]);
+    await shell.signOut(page);
+
+    await signInPage.signIn(page, member.email, 'a new long password');
+    await page.waitForURL(/\/today/);
+    await context.close();
+  }, 90_000);
 });

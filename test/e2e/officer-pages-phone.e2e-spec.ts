@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { DateTime } from 'luxon';
-import { Locator, Page } from 'playwright-core';
+import { Page } from 'playwright-core';
 import { loadConfig } from '@server/config';
 import { createPlan, givePaidUpDues, paidThroughOf } from '../integration/helpers/dues-factory';
 import { createUser } from '../integration/helpers/user-factory';
@@ -9,24 +9,7 @@ import { duesLedgerPage, outboxPage } from './helpers/dues-pages';
 import { useE2eEnvironment } from './helpers/e2e-environment';
 import { kitRoomPage } from './helpers/kit-room-pages';
 import { signInPage } from './helpers/pages';
-
-const PHONE = { width: 375, height: 740 };
-
-/** Nothing scrolls sideways: the page is no wider than the phone. */
-const pageWidth = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth);
-
-/**
- * The element lies inside the phone's screen from left to right once scrolled to by page scrolling alone:
- * every sideways scroller around it is put back at its start, as a person who scrolls only down sees it.
- */
-async function inSight(element: Locator): Promise<boolean> {
-  await element.evaluate((target) => {
-    target.scrollIntoView({ block: 'center' });
-    for (let around = target.parentElement; around; around = around.parentElement) around.scrollLeft = 0;
-  });
-  const box = await element.boundingBox();
-  return !!box && box.x >= 0 && box.x + box.width <= PHONE.width;
-}
+import { inSight, pageWidth, PHONE } from './helpers/phone';
 
 describe("The officer's pages on a 375 px phone", () => {
   const env = useE2eEnvironment();

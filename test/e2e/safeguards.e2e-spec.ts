@@ -3,7 +3,8 @@ import { createUser } from '../integration/helpers/user-factory';
 import { newPage, seriousA11yViolations } from './helpers/browser';
 import { useE2eEnvironment } from './helpers/e2e-environment';
 import { signInPage } from './helpers/pages';
-import { recipeEditorPage } from './helpers/recipes-pages';
+import { inSight, pageWidth, PHONE } from './helpers/phone';
+import { cataloguePage, recipeEditorPage } from './helpers/recipes-pages';
 
 describe('Recipe editor safeguards in the browser', () => {
   const env = useE2eEnvironment();
@@ -175,6 +176,32 @@ describe('Phone-width lists and the brew-day sheet', () => {
     await page.getByLabel('Search recipes').fill('zzzz');
     await page.getByText('No recipes match “zzzz”.').waitFor();
     expect(await seriousA11yViolations(page)).toEqual([]);
+    await context.close();
+  }, 120_000);
+
+  it('when an admin uses a 375 px phone, then a member and a catalogue entry read as cards with their e-mail, roles and figures in sight', async () => {
+    const { tag } = await createCatalogueEntries(env.server.db);
+    const name = `Phone Admin ${tag}`;
+    const admin = await createUser(env.server.db, ['member', 'admin'], { name });
+    const { context, page } = await newPage(env.browser, env.server.baseUrl, PHONE);
+    await signInPage.signIn(page, admin.email, admin.password);
+    await page.waitForURL(/\/today/);
+
+    await page.goto('/members');
+    await page.getByRole('heading', { level: 1, name: 'Members' }).waitFor();
+    await page.getByLabel('Find a member by name or e-mail').fill(name);
+    const memberCard = page.getByRole('row').filter({ hasText: name });
+    await memberCard.waitFor();
+    expect(await inSight(memberCard.getByText(admin.email))).toBe(true);
+    expect(await inSight(memberCard.getByRole('group', { name: `Roles of ${name}` }))).toBe(true);
+    expect(await pageWidth(page)).toBeLessThanOrEqual(PHONE.width);
+
+    await cataloguePage.open(page, 'Hops');
+    const hopCard = page.getByRole('row').filter({ hasText: `Test hop ${tag}` });
+    await hopCard.waitFor();
+    expect(await inSight(hopCard.getByText('10 %', { exact: true }))).toBe(true);
+    expect(await inSight(hopCard.getByText('pellet', { exact: true }))).toBe(true);
+    expect(await pageWidth(page)).toBeLessThanOrEqual(PHONE.width);
     await context.close();
   }, 120_000);
 });
