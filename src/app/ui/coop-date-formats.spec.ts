@@ -33,4 +33,11 @@ describe('the app-wide date formats', () => {
     expect(adapter.format(at, formats.display.dateInput)).toBe('2027-04-03');
     expect(adapter.format(at, formats.display.timeInput)).toBe('21:05');
   });
+
+  it('starts the calendar week on Monday whatever the browser locale (ISO 8601 weeks, as the brew plan counts them)', () => {
+    const { adapter } = fromAppConfig();
+    adapter.setLocale('en-US');
+
+    expect(adapter.getFirstDayOfWeek()).toBe(1);
+  });
 });

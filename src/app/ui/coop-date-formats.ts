@@ -1,6 +1,6 @@
 import { EnvironmentProviders, makeEnvironmentProviders } from '@angular/core';
 import { MatDateFormats } from '@angular/material/core';
-import { provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
+import { MAT_LUXON_DATE_ADAPTER_OPTIONS, MatLuxonDateAdapterOptions, provideLuxonDateAdapter } from '@angular/material-luxon-adapter';
 
 /**
  * Every date field of the app is typed and shown as yyyy-MM-dd, which reads the same in any
@@ -19,7 +19,13 @@ export const COOP_DATE_FORMATS: MatDateFormats = {
   },
 };
 
+/** Calendars start their weeks on Monday, as the ISO 8601 weeks of the brew plan do. */
+const COOP_DATE_ADAPTER_OPTIONS: MatLuxonDateAdapterOptions = { useUtc: false, firstDayOfWeek: 1, defaultOutputCalendar: 'gregory' };
+
 /** The luxon date adapter with the co-op's formats, provided once for the whole app. */
 export function provideCoopDateAdapter(): EnvironmentProviders {
-  return makeEnvironmentProviders(provideLuxonDateAdapter(COOP_DATE_FORMATS));
+  return makeEnvironmentProviders([
+    provideLuxonDateAdapter(COOP_DATE_FORMATS),
+    { provide: MAT_LUXON_DATE_ADAPTER_OPTIONS, useValue: COOP_DATE_ADAPTER_OPTIONS },
+  ]);
 }
