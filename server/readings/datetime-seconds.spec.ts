@@ -1,4 +1,4 @@
-import { epochSecondsOfDatetime } from './datetime-seconds';
+import { daysFromCivil, epochSecondsOfDatetime } from './datetime-seconds';
 
 describe('epochSecondsOfDatetime', () => {
   it('reads the database text of a DATETIME as seconds since 1970, UTC', () => {
@@ -13,5 +13,17 @@ describe('epochSecondsOfDatetime', () => {
 
   it('reads a value with fractions of a second, should a column ever keep them, as its whole second', () => {
     expect(epochSecondsOfDatetime('2026-11-01 08:05:07.250')).toBe(Date.UTC(2026, 10, 1, 8, 5, 7) / 1000);
+  });
+});
+
+describe('daysFromCivil', () => {
+  it('counts days from 1970-01-01 across century and leap-year rules, as ECMAScript Date does', () => {
+    // Hinnant's days_from_civil: 2000-03-01 is day 11,017; checked here against Date.UTC over 1900–2100.
+    for (let t = Date.UTC(1900, 0, 1); t <= Date.UTC(2100, 11, 31); t += 86_400_000) {
+      const d = new Date(t);
+      const days = daysFromCivil(d.getUTCFullYear(), d.getUTCMonth() + 1, d.getUTCDate());
+      if (days !== t / 86_400_000) throw new Error(`${d.toISOString()}: ${days}`);
+    }
+    expect(daysFromCivil(2000, 3, 1)).toBe(11_017);
   });
 });

@@ -15,8 +15,10 @@ describe('toReadingColumns', () => {
     expect(columns.measuredAt).toEqual([Date.UTC(2026, 10, 21, 8) / 1000, 300, 300]);
     expect(columns.rawValue).toEqual([12.4, 1.048, 1.0475]);
     expect(columns.sampleTemperatureC).toEqual([19.5, 18, null]);
-    expect(columns.sourceDetail).toEqual([null, 'log.csv', 'Fermenter float']);
-    expect(columns.createdByName).toEqual(['Mira Holt (demo)', 'Mira Holt (demo)', null]);
+    expect(columns.sourceDetail).toEqual({ values: [null, 'log.csv', 'Fermenter float'], lengths: [1, 1, 1] });
+    // Values repeated from row to row go as runs.
+    expect(columns.createdByName).toEqual({ values: ['Mira Holt (demo)', null], lengths: [2, 1] });
+    expect(columns.note).toEqual({ values: ['after dry hop', ''], lengths: [1, 2] });
 
     const readings = readingsFromColumns(4, JSON.parse(JSON.stringify(columns)));
     expect(readings[0]).toEqual({
@@ -29,7 +31,8 @@ describe('toReadingColumns', () => {
   });
 
   it('names a source it has no name for as null, and an empty page as empty columns', () => {
-    expect(toReadingColumns([fromFile], { users: new Map(), uploads: new Map(), tokens: new Map() })).toMatchObject({ sourceDetail: [null], createdByName: [null] });
+    const unnamed = toReadingColumns([fromFile], { users: new Map(), uploads: new Map(), tokens: new Map() });
+    expect(readingsFromColumns(1, unnamed)[0]).toMatchObject({ sourceDetail: null, createdByName: null });
     expect(toReadingColumns([], names).id).toEqual([]);
   });
 });

@@ -6,3 +6,4 @@ export * from './fermentation-flags';
 export * from './fermentation-progress';
 export * from './readings-api';
 export * from './reading-columns';
+export * from './value-runs';

@@ -1,4 +1,4 @@
-import { ReadingPage } from '@shared/readings';
+import { ReadingPage, readingsFromColumns } from '@shared/readings';
 import { ApiClient } from './helpers/api-client';
 import { startBatch } from './helpers/batch-factory';
 import { createTestApp, TestApp } from './helpers/test-app';
@@ -67,7 +67,7 @@ describe('Readings import and export API', () => {
     expect(again.body.duplicates.map((d: { line: number }) => d.line)).toEqual([2, 4, 6, 7]);
     expect(await stored(batch.id)).toHaveLength(4);
     const list: ReadingPage = (await client.get(`/api/batches/${batch.id}/readings?limit=10`)).body;
-    expect(list.columns.sourceDetail[0]).toBe('log.csv');
+    expect(readingsFromColumns(list.batchId, list.columns)[0].sourceDetail).toBe('log.csv');
   });
 
   it('when the file repeats a time and instrument, then the repeat is reported as a duplicate of its first line', async () => {
