@@ -125,7 +125,7 @@ describe('Bookings API', () => {
     expect((await owner.get('/api/bookings/mine')).body).toEqual([]);
   });
 
-  it('when an admin books for a member, moves and blocks, then members cannot do the same', async () => {
+  it('when an admin books for a member, moves, blocks and cancels, then members cannot do the same', async () => {
     const item = await createKitItem(t.db);
     const admin = await ApiClient.signedIn(t.app, await createUser(t.db, ['member', 'admin']));
     const person = await createPaidUpUser(t.db);
@@ -145,6 +145,10 @@ describe('Bookings API', () => {
     expect(moved.body).toMatchObject({ startLocal: day(42, 10), endLocal: day(43, 10) });
     expect(memberBlocks.status).toBe(403);
     expect((await client.get('/api/bookings/mine')).body.map((b: { id: number }) => b.id)).toEqual([forMember.body.id]);
+
+    const cancelledByAdmin = await admin.send('delete', `/api/bookings/${forMember.body.id}`);
+    expect(cancelledByAdmin.status).toBe(204);
+    expect((await client.get('/api/bookings/mine')).body).toEqual([]);
   });
 
   it('when the calendar asks for a range, then it lists the holds of that range for the item', async () => {
