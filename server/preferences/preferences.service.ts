@@ -1,6 +1,7 @@
 import { Knex } from 'knex';
 import { z } from 'zod';
 import { UNIT_SYSTEMS, UserPreferences } from '@shared/recipes';
+import { recordAudit } from '../audit/audit-log';
 import { parseRequest } from '../http/parse-request';
 import { usersRepository } from '../users/users.repository';
 
@@ -15,7 +16,11 @@ export function createPreferencesService(db: Knex) {
 
     async save(userId: number, body: unknown): Promise<UserPreferences> {
       const preferences = parseRequest(preferencesSchema, body);
-      await usersRepository.update(db, userId, { unit_system: preferences.unitSystem });
+      // The change and its audit entry share one transaction, as the profile page's change of units does.
+      await db.transaction(async (trx) => {
+        await usersRepository.update(trx, userId, { unit_system: preferences.unitSystem });
+        await recordAudit(trx, { actorUserId: userId, action: 'preferences-changed', subjectType: 'user', subjectId: userId, detail: preferences });
+      });
       return preferences;
     },
   };

@@ -106,11 +106,13 @@ describe('Recipes API', () => {
     expect(res.body.fields).toHaveProperty(['design.hops.0']);
   });
 
-  it('when a member sets US units, then the preference is kept', async () => {
-    const { client } = await memberWithCatalogue();
+  it('when a member sets US units, then the preference is kept and audited; an unknown system changes and audits nothing', async () => {
+    const { client, member: user } = await memberWithCatalogue();
     expect((await client.get('/api/preferences')).body).toEqual({ unitSystem: 'metric' });
     expect((await client.send('put', '/api/preferences', { unitSystem: 'us' })).status).toBe(200);
     expect((await client.get('/api/preferences')).body).toEqual({ unitSystem: 'us' });
     expect((await client.send('put', '/api/preferences', { unitSystem: 'imperial' })).status).toBe(400);
+    const audited = await t.db('audit_log').where({ action: 'preferences-changed', subject_id: user.id });
+    expect(audited.map((row) => row.actor_user_id)).toEqual([user.id]);
   });
 });
