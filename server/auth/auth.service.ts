@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { UserRecord, usersRepository } from '../users/users.repository';
 import { PasswordHasher } from './password-hasher';
 

@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { BATCH_STATUS_LABELS, FERMENTER_HOLDING_STATUSES, isBackwardMove, MoveBatchRequest, skippedStatuses } from '@shared/batches';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { AppError } from '../errors/app-error';
 import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { assertMayEditBatch, batchNotFound } from './batch-access';

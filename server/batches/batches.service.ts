@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { hasAnyRole, SessionUser } from '@shared/auth';
 import { ACTIVE_STATUSES, Batch, BrewerChoice, BatchSummary, CreateBatchRequest, FermenterChoice, FERMENTER_HOLDING_STATUSES, UpdateBatchRequest } from '@shared/batches';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { AppError, forbidden } from '../errors/app-error';
 import { RecipesService } from '../recipes';
 import { usersRepository } from '../users/users.repository';

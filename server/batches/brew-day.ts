@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { BrewDayMeasurements } from '@shared/batches';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { assertMayEditBatch, batchNotFound } from './batch-access';
 import { batchesRepository } from './batches.repository';

@@ -2,7 +2,7 @@ import ical from 'ical-generator';
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { BOOKINGS_PATH, BookingFeedLink, BookingFeedLinkStatus } from '@shared/bookings';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { createOneTimeToken, hashOneTimeToken } from '../auth/one-time-token';
 import { AppError } from '../errors/app-error';
 import { bookingsRepository } from './bookings.repository';

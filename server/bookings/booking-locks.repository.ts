@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { Booking } from '@shared/bookings';
-import { liveBookings, toBooking } from './booking-records';
+import { liveBookings, toBooking } from './booking-records.repository';
 
 /**
  * The locking reads a write checks an item's holds with, inside its transaction: they see what

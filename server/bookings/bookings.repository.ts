@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { Booking } from '@shared/bookings';
-import { liveBookings, toBooking } from './booking-records';
+import { liveBookings, toBooking } from './booking-records.repository';
 
 /** Reads of bookings: one, those held in a range, a day's reminders, a member's. */
 export const bookingsRepository = {

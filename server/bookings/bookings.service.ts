@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { Booking, CreateBookingRequest, heldUntil, MoveBookingRequest } from '@shared/bookings';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { AppError, forbidden } from '../errors/app-error';
 import { assertItemFree, lockBookableItem } from './booking-holds';

@@ -4,7 +4,7 @@ import { SessionUser } from '@shared/auth';
 import { BOOKING_LIMITS } from '@shared/bookings';
 import { AcceptSlotRequest, BrewSchedule, DEFAULT_SCHEDULES, heldEnd, MovePlannedBatchRequest, placeSchedule, PlannedBatch } from '@shared/brew-plan';
 import { KitItem } from '@shared/kit';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { batchNotFound } from '../batches/batch-access';
 import { dateOnly } from '../batches/batch-mapping';
 import { batchesRepository } from '../batches/batches.repository';

@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { BrewhouseSettings } from '@shared/recipes';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { parseRequest } from '../http/parse-request';
 import { brewhouseSettingsSchema } from './brewhouse.schemas';
 import { brewhouseRepository } from './brewhouse.repository';

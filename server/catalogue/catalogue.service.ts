@@ -2,7 +2,7 @@ import { Knex } from 'knex';
 import { z } from 'zod';
 import { SessionUser } from '@shared/auth';
 import { CatalogueImportResult, ImportChoice, IngredientCatalogue, IngredientKind, IngredientUsage } from '@shared/recipes';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { AppError } from '../errors/app-error';
 import { parseRequest } from '../http/parse-request';

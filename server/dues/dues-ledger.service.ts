@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { CreateDuesPlanRequest, DuesLedger, DuesOverview, duesStatus, TEST_CARDS } from '@shared/dues';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { AppError } from '../errors/app-error';
 import { coopToday } from './dues-clock';
 import { duesRepository, isoDate } from './dues.repository';

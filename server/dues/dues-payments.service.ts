@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { PayDuesRequest, RecordCashPaymentRequest } from '@shared/dues';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { AppError } from '../errors/app-error';
 import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { usersRepository } from '../users/users.repository';

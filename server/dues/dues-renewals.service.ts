@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { duesStatus, nextDuesPeriod } from '@shared/dues';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { outboxRepository } from '../mail/outbox.repository';
 import { duesOverdueMail, lapsedWithBookingsMail, renewalResultMail } from '../mail/templates/dues-mails';
 import { usersRepository } from '../users/users.repository';

@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { DuesPlan, nextDuesPeriod } from '@shared/dues';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { OutgoingMail } from '../mail/mail-message';
 import { outboxRepository } from '../mail/outbox.repository';

@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { AcceptInvitationRequest, InvitationPreview, Role, SessionUser } from '@shared/auth';
 import { Invitation } from '@shared/members';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { createOneTimeToken, hashOneTimeToken } from '../auth/one-time-token';
 import { PasswordHasher } from '../auth/password-hasher';
 import { toSessionUser } from '../auth/auth.service';

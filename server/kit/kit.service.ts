@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { KitItem, KitItemInput, KitItemSummary, MaintenanceEntry, MaintenanceEntryInput } from '@shared/kit';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { AppError } from '../errors/app-error';
 import { kitRepository } from './kit.repository';
 

@@ -4,7 +4,7 @@ import { analyseDistillate, distillateStrengthUncertainty, ScienceRangeError } f
 import {
   analyseDistillateWithTable, BUILTIN_TABLE_NAME, DistillateAnalysisRequest, DistillateAnalysisResult, distillateWithTableUncertainty, LabComparison, LabTable,
 } from '@shared/strength-check';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { batchNotFound } from '../batches/batch-access';
 import { batchesRepository } from '../batches/batches.repository';
 import { AppError } from '../errors/app-error';

@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { ToleranceClass, ToleranceClassInput } from '@shared/strength-check';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { AppError } from '../errors/app-error';
 import { toleranceClassesRepository as repo } from './tolerance-classes.repository';
 

@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { Role } from '@shared/auth';
 import { Member, MemberListResponse, UpdateMemberRequest } from '@shared/members';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { transactionWithRetry } from '../transactions/retry-deadlock';
 import { AppError } from '../errors/app-error';
 import { invitationsRepository } from '../invitations/invitations.repository';

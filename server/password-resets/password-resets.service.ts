@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { IssuedPasswordReset } from '@shared/members';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { createOneTimeToken, hashOneTimeToken } from '../auth/one-time-token';
 import { PasswordHasher } from '../auth/password-hasher';
 import { AppError } from '../errors/app-error';

@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { z } from 'zod';
 import { UNIT_SYSTEMS, UserPreferences } from '@shared/recipes';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { parseRequest } from '../http/parse-request';
 import { usersRepository } from '../users/users.repository';
 

@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { ChangePasswordRequest, Profile, UpdateProfileRequest } from '@shared/profile';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { PasswordHasher } from '../auth/password-hasher';
 import { sessionsRepository } from '../auth/sessions.repository';
 import { AppError } from '../errors/app-error';

@@ -2,7 +2,7 @@ import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { CorrectionFactorRequest } from '@shared/batches';
 import { ScienceRangeError, wortCorrectionFactor } from '@shared/science';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { assertMayEditBatch, batchNotFound } from '../batches/batch-access';
 import { batchesRepository } from '../batches/batches.repository';
 import { AppError } from '../errors/app-error';

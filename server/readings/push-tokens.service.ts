@@ -2,7 +2,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { IssuedPushToken, PushReadingsRequest, PushReadingsResult, PushTokenSummary } from '@shared/readings';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { assertMayEditBatch, batchNotFound } from '../batches/batch-access';
 import { batchesRepository } from '../batches/batches.repository';
 import { AppError } from '../errors/app-error';

@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { ImportLineProblem, ImportMode, ReadingColumnMapping, ReadingImportResult } from '@shared/readings';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { assertMayEditBatch, batchNotFound } from '../batches/batch-access';
 import { batchesRepository } from '../batches/batches.repository';
 import { AppError } from '../errors/app-error';

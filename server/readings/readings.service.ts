@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { GravityReading, ReadingInput, ReadingPage, ReadingSortColumn } from '@shared/readings';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { assertMayEditBatch, batchNotFound } from '../batches/batch-access';
 import { BatchRecord, batchesRepository } from '../batches/batches.repository';
 import { AppError } from '../errors/app-error';

@@ -11,7 +11,7 @@ import {
   RecipeVisibility,
   UpdateRecipeRequest,
 } from '@shared/recipes';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { AppError, forbidden } from '../errors/app-error';
 import { createRecipeAccess } from './recipe-access';
 import { assertReferencesExist } from './recipe-references';

@@ -3,7 +3,7 @@ import { SessionUser } from '@shared/auth';
 import { ReferenceTableDetail, ReferenceTableList, RowCorrectionRequest } from '@shared/reference-tables';
 import { auditDensityTable, ScienceRangeError } from '@shared/science';
 import { LabTable } from '@shared/strength-check';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { AppError } from '../errors/app-error';
 import { parseDensityTableCsv } from './density-table-csv';
 import { referenceTablesRepository as repo } from './reference-tables.repository';

@@ -2,7 +2,7 @@ import { Knex } from 'knex';
 import { BatchStatus } from '@shared/batches';
 import { IngredientName, StockDraw, StockUnit, VersionBillItem } from '@shared/stock';
 import { calendarDay } from '../kit/kit.repository';
-import { joinIngredientNames } from './ingredient-names';
+import { joinIngredientNames } from './ingredient-names.repository';
 
 /** A batch with what its bill is made from: the version's id and volume, and the batch volume. */
 export interface BillSource {

@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { batchBill, BillLine, DrawableLot, DrawLineView, DrawPlanLine, DrawPreview, hasShortfall, planDraw, roundQuantity, StockDraw } from '@shared/stock';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { AppError } from '../errors/app-error';
 import { StockLotRow } from '../db';
 import { calendarDay } from '../kit/kit.repository';

@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { BestBeforeAlert, StockLevel, StockTotal, StockUnit } from '@shared/stock';
 import { calendarDay } from '../kit/kit.repository';
-import { joinIngredientNames } from './ingredient-names';
+import { joinIngredientNames } from './ingredient-names.repository';
 
 /** Data access for totals on hand, reorder levels and lots near their best-before. */
 export const stockLevelsRepository = {

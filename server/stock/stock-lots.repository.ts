@@ -3,7 +3,7 @@ import { IngredientKind } from '@shared/recipes';
 import { AdjustmentReason, StockLot, StockMovement, StockMovementKind, StockUnit } from '@shared/stock';
 import { StockLotRow } from '../db';
 import { calendarDay } from '../kit/kit.repository';
-import { joinIngredientNames } from './ingredient-names';
+import { joinIngredientNames } from './ingredient-names.repository';
 
 type LotRecord = StockLotRow & { ingredient_kind: IngredientKind; ingredient_name: string };
 

@@ -1,7 +1,7 @@
 import { Knex } from 'knex';
 import { SessionUser } from '@shared/auth';
 import { AdjustLotRequest, ReceiveLotRequest, ReorderLevelRequest, roundQuantity, STOCK_LIMITS, STOCK_UNITS_BY_KIND, StockAlerts, stockAlerts, addDays, StockLot, StockMovement, StockUnit } from '@shared/stock';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { coopToday } from '../dues/dues-clock';
 import { AppError } from '../errors/app-error';
 import { transactionWithRetry } from '../transactions/retry-deadlock';

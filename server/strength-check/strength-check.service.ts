@@ -3,7 +3,7 @@ import { SessionUser } from '@shared/auth';
 import {
   BatchStrengthCheck, batchStrengthFigures, DECLARED_STRENGTH_CAUTION, declaredStrengthVerdict, SignOffRequest, StrengthRecord,
 } from '@shared/strength-check';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { batchNotFound } from '../batches/batch-access';
 import { batchesRepository } from '../batches/batches.repository';
 import { AppError } from '../errors/app-error';

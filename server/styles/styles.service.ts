@@ -1,6 +1,6 @@
 import { Knex } from 'knex';
 import { StyleTarget, StyleTargetInput } from '@shared/recipes';
-import { recordAudit } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log.repository';
 import { AppError } from '../errors/app-error';
 import { stylesRepository } from './styles.repository';
 
