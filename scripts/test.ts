@@ -3,7 +3,7 @@ import { mkdirSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { Knex } from 'knex';
 import { loadConfig } from '../server/config';
-import { ensureDatabaseAndUser, openMigratedDb } from './setup/app-database';
+import { ensureDatabaseAndUser, openMigratedDb, seed } from './setup/app-database';
 import { buildClientIfStale } from './setup/client-build';
 import { freePort } from './setup/free-port';
 import { LocalFakes, startLocalFakes } from './setup/local-fakes';
@@ -16,6 +16,7 @@ const root = join(__dirname, '..');
 const home = join(root, '.data', 'test');
 const report = join(root, 'test-results', 'jest.json');
 const E2E_DATABASE = 'commonwort_e2e';
+const DEMO_DATABASE = 'commonwort_demo';
 
 async function runJestAsync(env: NodeJS.ProcessEnv, extraArgs: string[]): Promise<number> {
   step('Running every test: shared, server, client, integration (real MariaDB) and end-to-end (Chromium)');
@@ -46,6 +47,7 @@ async function main(): Promise<number> {
       DB_PORT: String(mariadb.port),
       DB_NAME: 'commonwort_test',
       E2E_DB_NAME: E2E_DATABASE,
+      DEMO_DB_NAME: DEMO_DATABASE,
       DB_USER: 'commonwort_test',
       DB_PASSWORD: secrets.dbPassword,
       SESSION_SECRET: secrets.sessionSecret,
@@ -55,13 +57,23 @@ async function main(): Promise<number> {
     };
     const config = loadConfig(env);
     const jestArgs = process.argv.slice(2);
-    const withBrowser = !jestArgs.includes('--selectProjects') || jestArgs.includes('e2e');
+    const runs = (project: string) => !jestArgs.includes('--selectProjects') || jestArgs.includes(project);
+    const withBrowser = runs('e2e');
     // The browser journeys get a database of their own: pages list what is stored, and the many
     // rows the integration specs write meanwhile would only slow them and move their layout.
     const e2eDb = { ...config.db, database: E2E_DATABASE };
     for (const db of withBrowser ? [config.db, e2eDb] : [config.db]) {
       ensureDatabaseAndUser(mariadb, db, true);
       knex = await openMigratedDb(db);
+      await knex.destroy();
+      knex = undefined;
+    }
+    if (runs('integration')) {
+      // The demo co-op, seeded exactly as `npm start` seeds it, for the spec that checks the seeds.
+      const demoDb = { ...config.db, database: DEMO_DATABASE };
+      ensureDatabaseAndUser(mariadb, demoDb, true);
+      knex = await openMigratedDb(demoDb);
+      await seed(knex);
       await knex.destroy();
       knex = undefined;
     }

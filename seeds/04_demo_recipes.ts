@@ -40,9 +40,10 @@ export const DEMO_RECIPES: DemoRecipe[] = [
     style: 'Mild',
     visibility: 'private',
     design: { name: 'Hearthside Mild', batchVolumeLitres: 23, mashEfficiencyPercent: 72, boilMinutes: 60, mashSteps: mash(68), notes: 'Demo recipe (invented).' },
-    fermentables: [['Pale ale malt', 3.1], ['Crystal malt 60 °L', 0.3], ['Chocolate malt', 0.13], ['Flaked oats', 0.2]],
+    // The brief's mild is about 4 %: near the top of the style's gravity, with a yeast that ferments it dry enough.
+    fermentables: [['Pale ale malt', 3.3], ['Crystal malt 60 °L', 0.3], ['Chocolate malt', 0.13], ['Flaked oats', 0.2]],
     hops: [['English aroma hop', 28, 60, 'boil'], ['English aroma hop', 12, 15, 'boil']],
-    yeast: 'English ale yeast',
+    yeast: 'Clean ale yeast',
   },
 ];
 

@@ -4,6 +4,7 @@ import { densityTableCsv } from '../integration/helpers/density-table-factory';
 import { createUser } from '../integration/helpers/user-factory';
 import { seedFermentedBatch } from './helpers/batch-strength-seed';
 import { newPage } from './helpers/browser';
+import { settled } from './helpers/phone';
 import { useE2eEnvironment } from './helpers/e2e-environment';
 import { signInPage } from './helpers/pages';
 import { referenceTablesPage, strengthCheckPage } from './helpers/strength-pages';
@@ -15,6 +16,7 @@ const pageWidth = (page: Page) => page.evaluate(() => document.documentElement.s
 
 /** The element lies inside the phone's screen, left to right and top to bottom. */
 async function onScreen(page: Page, testIdOrLabel: ReturnType<Page['getByTestId']>): Promise<boolean> {
+  await settled(page);
   const box = await testIdOrLabel.boundingBox();
   return !!box && box.x >= 0 && box.x + box.width <= PHONE.width && box.y >= 0 && box.y + box.height <= PHONE.height;
 }
