@@ -52,13 +52,16 @@ describe('Strength pages on a 375 px phone', () => {
     await page.goto(`/strength-check/batches/${batchId}`);
     await page.getByTestId('density-based').waitFor();
     const declared = page.getByRole('spinbutton', { name: 'Declared strength' });
-    await declared.scrollIntoViewIfNeeded();
+    await declared.evaluate((field) => field.scrollIntoView({ block: 'center' }));
     await declared.fill('4.9');
     expect(await onScreen(page, declared)).toBe(true);
     expect(await pageWidth(page)).toBeLessThanOrEqual(PHONE.width);
 
     await referenceTablesPage.open(page);
     const name = page.getByLabel('Table name');
+    // Brought to the middle of the screen as a person scrolls to it, not to the very edge, so a
+    // pixel of late layout above it can't push it out.
+    await name.evaluate((field) => field.scrollIntoView({ block: 'center' }));
     await name.fill(`Phone table ${randomUUID().slice(0, 8)}`);
     expect(await onScreen(page, name)).toBe(true);
     await page.getByLabel('CSV file of the density table').setInputFiles({ name: 'table.csv', mimeType: 'text/csv', buffer: Buffer.from(densityTableCsv(20, 0.9)) });
